@@ -1,0 +1,45 @@
+// Package geom is panto's exact two-dimensional geometry: points, line and circular-arc
+// segments, closed contours, regions with holes, and the operations the rest of panto builds on
+// (area, containment, transforms, flattening, signed offset, union and difference, and measures
+// of how large a round tool can be to reach every part of a region).
+//
+// geom knows nothing of machining; it imports only the standard library.
+//
+// # Units
+//
+// Coordinates are plain float64 numbers. The rest of panto always passes millimetres, so every
+// tolerance below is written in millimetres.
+//
+// # Segments
+//
+// A Segment is a straight line or a circular arc, in one canonical form: start point A, end
+// point B, and for arcs the Center and the signed Sweep in radians (positive counter-clockwise,
+// negative clockwise, 0 < |Sweep| ≤ 2π). A line has Sweep == 0 and its Center is unused. The
+// radius of an arc is |A − Center|; B lies on the same circle at angle(A) + Sweep. A full
+// circle is one arc with A == B and |Sweep| == 2π. The end points are stored, not recomputed, so
+// contours join exactly where their author joined them; Center is kept because offsetting an arc
+// keeps its centre and only changes its radius.
+//
+// # Contours and regions
+//
+// A Contour is a closed chain of segments: each segment ends where the next one starts, and
+// the last ends where the first starts. A Region is one outer contour and any number of holes.
+// After NewRegion (or Normalize) the outer contour runs counter-clockwise and every hole runs
+// clockwise, so the region's interior always lies to the left of the direction of travel. A
+// positive offset grows a region (the outer contour moves out, holes shrink); a negative
+// offset shrinks it. Points exactly on the boundary count as inside for Contains.
+//
+// # Tolerances
+//
+// Two points are equal when they are within pointTol (1e-9 mm) of each other: float64 carries
+// about 16 significant digits, so on parts up to a metre across this sits six orders of
+// magnitude above rounding noise and eight below anything a machinist can measure. Flattening
+// arcs to polylines takes the chord tolerance as an argument; DefaultChordTolerance (1 µm) keeps
+// the error at the part below a micrometre for any reduction ratio of 1 or more. Offsets treat
+// segments shorter than pointTol as absent, arcs whose radius shrinks to pointTol or below as
+// vanished, and pieces of the result shorter than pointTol are dropped and their neighbours
+// joined.
+//
+// Bad input is reported as an error from Validate naming the contour and segment index; geom
+// panics only when one of its own invariants is broken.
+package geom
