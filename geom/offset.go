@@ -1,0 +1,318 @@
+package geom
+
+import "math"
+
+// This file computes the signed offset of a region exactly. Each contour yields its raw offset
+// curves (every segment moved sideways by d, arcs about the convex corners, neighbours trimmed
+// at the concave ones); all raw curves are cut where they meet; a piece belongs to the answer
+// exactly when it lies |d| from the original boundary and no nearer, since every point of an
+// offset boundary is |d| from the nearest boundary point. The kept pieces are chained into
+// loops and assembled into regions.
+
+// ContourRef names one contour of a region: 0 is the outer contour, k the hole k−1.
+type ContourRef int
+
+// OffsetResult is the outcome of Region.Offset.
+type OffsetResult struct {
+	Regions  []Region     // the offset region(s); none when everything vanished
+	Vanished []ContourRef // input contours that left no piece in the result
+	Split    []ContourRef // input contours whose pieces ended up in more than one result contour
+	// Merged lists input contours whose pieces share a result contour with another input
+	// contour: a hole broke through to the outside or into another hole.
+	Merged []ContourRef
+}
+
+// offsetKeepTol is how much nearer than |d| to the original boundary a piece's midpoint may be
+// and still count as part of the offset. A true offset piece sits exactly |d| away up to
+// rounding, about 1e-13 mm on parts a metre across; pointTol leaves four orders of margin and
+// is the package's smallest meaningful distance.
+const offsetKeepTol = pointTol
+
+// tangentTurn is the turn in radians below which two segments count as meeting tangentially,
+// so a corner needs neither a join arc nor trimming. It is the 1e-12 that RoundedPolygon uses
+// to call a corner straight; a join over it at d = 1 m is 1e-9 mm long, below pointTol.
+const tangentTurn = 1e-12
+
+// Offset returns r grown by d (d > 0) or shrunk by −d (d < 0), exactly: lines stay lines, arcs
+// stay arcs about the same centre, convex corners get arcs of radius |d| about the corner,
+// concave corners are trimmed and loops removed. It also says which input contours vanished,
+// split or merged. d == 0 returns r unchanged. r should be valid (see Validate).
+func (r Region) Offset(d float64) OffsetResult {
+	if d == 0 {
+		return OffsetResult{Regions: []Region{r}}
+	}
+	res, _ := r.offset(d)
+	return res
+}
+
+// offset does the work of Offset and also returns how many kept pieces chainLoops could not
+// close into a loop, which is zero unless rounding defeated the method; tests check it.
+func (r Region) offset(d float64) (OffsetResult, int) {
+	r = r.Normalize()
+	cs := r.Contours()
+	groups := make([][]Segment, len(cs))
+	for i, c := range cs {
+		groups[i] = rawOffset(c, d)
+	}
+	kept := keepOffsetPieces(splitPieces(groups), newSegIndex(cs), math.Abs(d))
+	loops, srcs, open := chainLoops(kept)
+	res := OffsetResult{Regions: assemble(loops)}
+	res.Vanished, res.Split, res.Merged = contourFates(len(cs), srcs)
+	return res, open
+}
+
+// contourFates reads, from the source contour of each piece of each result loop, which of n
+// input contours vanished, split into several loops, or share a loop with another contour.
+func contourFates(n int, srcs [][]int) (vanished, split, merged []ContourRef) {
+	loopsOf := make([]int, n)
+	mixed := make([]bool, n)
+	mark := make([]int, n) // loop index + 1 that last counted contour k
+	var distinct []int
+	for li, s := range srcs {
+		distinct = distinct[:0]
+		for _, k := range s {
+			if mark[k] != li+1 {
+				mark[k] = li + 1
+				distinct = append(distinct, k)
+			}
+		}
+		for _, k := range distinct {
+			loopsOf[k]++
+			mixed[k] = mixed[k] || len(distinct) > 1
+		}
+	}
+	for k := 0; k < n; k++ {
+		switch {
+		case loopsOf[k] == 0:
+			vanished = append(vanished, ContourRef(k))
+		case loopsOf[k] > 1:
+			split = append(split, ContourRef(k))
+		}
+		if mixed[k] {
+			merged = append(merged, ContourRef(k))
+		}
+	}
+	return vanished, split, merged
+}
+
+// rightOf returns p moved by d along the right-hand normal of the unit direction t.
+func rightOf(p, t Vec, d float64) Vec { return p.Add(Vec{t.Y, -t.X}.Mul(d)) }
+
+// offsetSegment returns s moved by d to its right: a line moves along its normal; an arc keeps
+// its centre and its radius grows by d when it turns left (the centre is on its left) or
+// shrinks by d when it turns right. It reports false when the result is shorter than pointTol
+// or an arc's radius falls to pointTol or below: that offset has vanished.
+func offsetSegment(s Segment, d float64) (Segment, bool) {
+	if !s.IsArc() {
+		t := s.B.Sub(s.A).Unit()
+		o := Line(rightOf(s.A, t, d), rightOf(s.B, t, d))
+		return o, o.Length() > pointTol
+	}
+	r := s.Radius()
+	nr := r - d
+	if s.Sweep > 0 {
+		nr = r + d
+	}
+	if nr <= pointTol {
+		return Segment{}, false
+	}
+	k := nr / r
+	o := Segment{
+		A:      s.Center.Add(s.A.Sub(s.Center).Mul(k)),
+		B:      s.Center.Add(s.B.Sub(s.Center).Mul(k)),
+		Center: s.Center,
+		Sweep:  s.Sweep,
+	}
+	if s.A.Near(s.B) {
+		o.B = o.A // a full circle stays exactly closed
+	}
+	return o, o.Length() > pointTol
+}
+
+// turnAt returns the signed angle (counter-clockwise positive) by which the direction of travel
+// turns from the end of s to the start of t.
+func turnAt(s, t Segment) float64 {
+	a, b := s.Tangent(1), t.Tangent(0)
+	return math.Atan2(a.Cross(b), a.Dot(b))
+}
+
+// rawOffset returns the raw offset curves of contour c at distance d, in order along the
+// contour: each segment's offset, a join arc of radius |d| about every corner where the offsets
+// move apart (the contour turns the same way as the offset side: left for d > 0, right for
+// d < 0), and, at corners where they overlap, the two neighbouring offsets trimmed to the
+// crossing nearest the corner. Anything else that overlaps is left for the filter.
+func rawOffset(c Contour, d float64) []Segment {
+	n := len(c)
+	offs := make([]Segment, n)
+	ok := make([]bool, n)
+	for i, s := range c {
+		offs[i], ok[i] = offsetSegment(s, d)
+	}
+	joins := make([]Segment, n)
+	hasJoin := make([]bool, n)
+	for i := range c {
+		j := (i + 1) % n
+		turn := turnAt(c[i], c[j])
+		switch {
+		case math.Abs(turn) <= tangentTurn || math.Abs(turn*d) <= pointTol:
+			snapJoint(offs, ok, i, j)
+		case turn*d > 0:
+			joins[i], hasJoin[i] = cornerJoin(c[i], c[j], offs, ok, i, j, d, turn)
+		case ok[i] && ok[j] && i != j:
+			trimCorner(&offs[i], &offs[j])
+		}
+	}
+	out := make([]Segment, 0, 2*n)
+	for i := range c {
+		if ok[i] {
+			out = append(out, offs[i])
+		}
+		if hasJoin[i] {
+			out = append(out, joins[i])
+		}
+	}
+	return out
+}
+
+// snapJoint makes the offsets of two segments that meet tangentially start and end at exactly
+// the same point; they differ by rounding or by less than pointTol.
+func snapJoint(offs []Segment, ok []bool, i, j int) {
+	if ok[i] && ok[j] && i != j && offs[i].B.Near(offs[j].A) {
+		offs[j].A = offs[i].B
+	}
+}
+
+// cornerJoin returns the arc about the corner between segments s (index i) and t (index j) that
+// carries the offset around it, from where s's offset ends to where t's begins. Where an offset
+// has vanished its end point is still where it would have been. It reports false for a join
+// shorter than pointTol.
+func cornerJoin(s, t Segment, offs []Segment, ok []bool, i, j int, d, turn float64) (Segment, bool) {
+	v := s.B
+	a := rightOf(v, s.Tangent(1), d)
+	if ok[i] {
+		a = offs[i].B
+	}
+	b := rightOf(v, t.Tangent(0), d)
+	if ok[j] {
+		b = offs[j].A
+	}
+	join := Segment{A: a, B: b, Center: v, Sweep: turn}
+	return join, join.Length() > pointTol
+}
+
+// trimCorner cuts the offsets a (before a concave corner) and b (after it) back to the crossing
+// nearest the corner, when they cross within both. Their overhanging ends lie nearer than |d|
+// to the corner's segments, so the filter would drop them anyway; trimming here keeps nearly
+// straight concave corners, where that overhang is within rounding of |d|, from leaving spurs.
+func trimCorner(a, b *Segment) {
+	best, found := crossing{}, false
+	bestGap := math.Inf(1)
+	for _, x := range intersect(*a, *b) {
+		gap := (1-x.ta)*a.Length() + x.tb*b.Length()
+		if gap < bestGap {
+			best, bestGap, found = x, gap, true
+		}
+	}
+	if !found || best.ta <= 0 || best.tb >= 1 || (best.ta == 1 && best.tb == 0) {
+		return
+	}
+	if best.ta < 1 {
+		*a = a.Sub(0, best.ta)
+	}
+	if best.tb > 0 {
+		*b = b.Sub(best.tb, 1)
+	}
+	a.B, b.A = best.at, best.at
+}
+
+// keepOffsetPieces returns the pieces whose midpoint is no nearer than dist − offsetKeepTol to
+// the original boundary. A kept piece also lies on the right side: it was carried out from the
+// boundary along a normal (or about a convex corner) by dist, and the straight path back to
+// where it came from cannot cross the boundary without bringing it nearer than dist.
+func keepOffsetPieces(ps []piece, idx *segIndex, dist float64) []piece {
+	kept := ps[:0:0]
+	for _, p := range ps {
+		if !idx.nearerThan(p.seg.Mid(), dist-offsetKeepTol) {
+			kept = append(kept, p)
+		}
+	}
+	return kept
+}
+
+// segIndexLeaf is how many consecutive segments share one leaf box of a segIndex: enough to
+// make the tree shallow, few enough that a leaf is cheap to scan. Chosen by benchmark.
+const segIndexLeaf = 8
+
+// segIndex answers "is any boundary segment nearer than r to p?" in about logarithmic time.
+// Contours are continuous, so consecutive segments lie together: the tree groups runs of
+// segIndexLeaf segments into leaf boxes and pairs of boxes into parents, level by level.
+type segIndex struct {
+	segs   []Segment
+	levels [][]Box // levels[0] holds the leaf boxes; the last level holds one box
+}
+
+// newSegIndex indexes every segment of the given contours.
+func newSegIndex(cs []Contour) *segIndex {
+	x := &segIndex{}
+	for _, c := range cs {
+		x.segs = append(x.segs, c...)
+	}
+	leaves := make([]Box, (len(x.segs)+segIndexLeaf-1)/segIndexLeaf)
+	for i := range leaves {
+		b := EmptyBox()
+		for _, s := range x.segs[i*segIndexLeaf : min(len(x.segs), (i+1)*segIndexLeaf)] {
+			b = b.Union(s.Bounds())
+		}
+		leaves[i] = b
+	}
+	x.levels = append(x.levels, leaves)
+	for lv := leaves; len(lv) > 1; {
+		up := make([]Box, (len(lv)+1)/2)
+		for i := range up {
+			up[i] = lv[2*i]
+			if 2*i+1 < len(lv) {
+				up[i] = up[i].Union(lv[2*i+1])
+			}
+		}
+		x.levels = append(x.levels, up)
+		lv = up
+	}
+	return x
+}
+
+// boxDist returns the distance from p to the nearest point of box b (0 inside it).
+func boxDist(b Box, p Vec) float64 {
+	dx := math.Max(0, math.Max(b.Min.X-p.X, p.X-b.Max.X))
+	dy := math.Max(0, math.Max(b.Min.Y-p.Y, p.Y-b.Max.Y))
+	return math.Hypot(dx, dy)
+}
+
+// nearerThan reports whether some indexed segment passes strictly nearer than r to p.
+func (x *segIndex) nearerThan(p Vec, r float64) bool {
+	if len(x.segs) == 0 {
+		return false
+	}
+	type node struct{ level, i int }
+	var buf [64]node // depth first holds at most one waiting node per level: no allocation
+	stack := append(buf[:0], node{len(x.levels) - 1, 0})
+	for len(stack) > 0 {
+		n := stack[len(stack)-1]
+		stack = stack[:len(stack)-1]
+		if boxDist(x.levels[n.level][n.i], p) >= r {
+			continue
+		}
+		if n.level > 0 {
+			stack = append(stack, node{n.level - 1, 2 * n.i})
+			if 2*n.i+1 < len(x.levels[n.level-1]) {
+				stack = append(stack, node{n.level - 1, 2*n.i + 1})
+			}
+			continue
+		}
+		for _, s := range x.segs[n.i*segIndexLeaf : min(len(x.segs), (n.i+1)*segIndexLeaf)] {
+			if s.DistanceTo(p) < r {
+				return true
+			}
+		}
+	}
+	return false
+}
