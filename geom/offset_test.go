@@ -226,3 +226,181 @@ func TestContourFates(t *testing.T) {
 		})
 	}
 }
+
+// boundaryDist returns the distance from p to the nearest boundary point of r.
+func boundaryDist(r Region, p Vec) float64 {
+	best := math.Inf(1)
+	for _, c := range r.Contours() {
+		for _, s := range c {
+			best = math.Min(best, s.DistanceTo(p))
+		}
+	}
+	return best
+}
+
+// totalArea returns the summed area of rs.
+func totalArea(rs []Region) float64 {
+	var a float64
+	for _, r := range rs {
+		a += r.Area()
+	}
+	return a
+}
+
+// checkOffset offsets r by d and checks what must hold of any offset: every piece closed into a
+// loop, every result valid (holes inside their outer, nothing crossing), every result boundary
+// point exactly |d| from r's boundary on the side d says, and a point lies in the result exactly
+// when it is in r and at least −d from its boundary (d < 0) or in r or nearer than d to it
+// (d > 0). It returns the result; label names the case (with its seed) in failures.
+func checkOffset(t *testing.T, label string, r Region, d float64, rng *rand.Rand) OffsetResult {
+	t.Helper()
+	res, open := r.offset(d)
+	if open != 0 {
+		t.Errorf("%s, d %g: %d pieces left out of every loop", label, d, open)
+	}
+	for i, g := range res.Regions {
+		if err := g.Validate(); err != nil {
+			t.Errorf("%s, d %g: result %d: %v", label, d, i, err)
+		}
+		for _, c := range g.Contours() {
+			for _, s := range c {
+				for _, u := range []float64{0, 0.25, 0.5, 0.75} {
+					p := s.At(u)
+					if got := boundaryDist(r, p); math.Abs(got-math.Abs(d)) > 1e-7 {
+						t.Errorf("%s, d %g: result point %v is %.12g from the boundary, want %g",
+							label, d, p, got, math.Abs(d))
+					}
+					if r.Contains(p) != (d < 0) {
+						t.Errorf("%s, d %g: result point %v: inside the input %v, want %v",
+							label, d, p, r.Contains(p), d < 0)
+					}
+				}
+			}
+		}
+	}
+	b := r.Bounds().Expand(math.Abs(d) + 1)
+	for k := 0; k < 300; k++ {
+		p := V(b.Min.X+rng.Float64()*(b.Max.X-b.Min.X), b.Min.Y+rng.Float64()*(b.Max.Y-b.Min.Y))
+		dist := boundaryDist(r, p)
+		if math.Abs(dist-math.Abs(d)) < 1e-6 {
+			continue // on the offset boundary, within rounding: either answer is right
+		}
+		want := r.Contains(p) && dist > -d
+		if d > 0 {
+			want = r.Contains(p) || dist < d
+		}
+		got := false
+		for _, g := range res.Regions {
+			got = got || g.Contains(p)
+		}
+		if got != want {
+			t.Errorf("%s, d %g: point %v (%.6g from the boundary): in the result %v, want %v",
+				label, d, p, dist, got, want)
+		}
+	}
+	return res
+}
+
+// refsEqual reports whether two lists of contour references are the same.
+func refsEqual(a, b []ContourRef) bool {
+	if len(a) != len(b) {
+		return false
+	}
+	for i := range a {
+		if a[i] != b[i] {
+			return false
+		}
+	}
+	return true
+}
+
+func TestOffsetShapes(t *testing.T) {
+	rect := NewRegion(mustRect(t, 10, 6, 0))
+	rounded := NewRegion(mustRect(t, 10, 6, 0.5))
+	// Derived: inside a 4 × 4 square shrunk by 0.6 the neck's opening of width 1 leaves a bulge
+	// between the two discs of radius 0.6 about the opening's corners:
+	// 2·∫₀^½ (0.6 − √(0.36 − m²)) dm = 0.6 − (0.5·√0.11 + 0.36·asin(5/6)).
+	bulge := 0.6 - (0.5*math.Sqrt(0.11) + 0.36*math.Asin(5.0/6))
+	// Derived: the part of that grown hole beyond x = 8.8, 0.8 past its right side's corner
+	// centres: a 0.4 × 2 strip and two pieces of quarter discs of radius 1.2,
+	// ∫_0.8^1.2 √(1.44 − x²) dx = π·1.44/4 − (0.8·√0.8 + 1.44·asin(2/3))/2.
+	beyond := 0.8 + 2*(math.Pi*1.44/4-(0.8*math.Sqrt(0.8)+1.44*math.Asin(0.8/1.2))/2)
+	tests := []struct {
+		name    string
+		r       Region
+		d       float64
+		regions int
+		area    float64 // total area of the result
+		arcs    int     // arcs in the result, -1 for any number
+		radius  float64 // radius of every result arc when arcs > 0
+		v, s, m []ContourRef
+	}{
+		// Derived: (w+2d)(h+2d) − (4−π)d², four corner arcs of radius d.
+		{"rectangle grown", rect, 1.5, 1, 13*9 - (4-math.Pi)*2.25, 4, 1.5, nil, nil, nil},
+		// Derived: (w−2d) × (h−2d) with sharp corners.
+		{"rectangle shrunk", rect, -1.5, 1, 7 * 3, 0, 0, nil, nil, nil},
+		// Derived: π(r ± d)².
+		{"circle grown", NewRegion(Circle(V(3, 4), 2)), 0.75, 1, math.Pi * 2.75 * 2.75, 1, 2.75, nil, nil, nil},
+		{"circle shrunk", NewRegion(Circle(V(3, 4), 2)), -0.75, 1, math.Pi * 1.25 * 1.25, 1, 1.25, nil, nil, nil},
+		// Derived: the fillets of radius 0.5 keep their centres and grow to radius 1.5.
+		{"fillets grow", rounded, 1, 1, 12*8 - (4-math.Pi)*2.25, 4, 1.5, nil, nil, nil},
+		// Derived: shrunk by 1 > 0.5 the fillets become sharp corners of the 8 × 4 rectangle.
+		{"fillets sharpen", rounded, -1, 1, 8 * 4, 0, 0, nil, nil, nil},
+		// Derived: 0.6 high, so nothing is 0.4 from every edge.
+		{"thin strip vanishes", NewRegion(mustRect(t, 2, 0.6, 0)), -0.4, 0, 0, 0, 0, []ContourRef{0}, nil, nil},
+		// Derived: a neck 1 wide vanishes under 0.6; each 4 × 4 end keeps 2.8² plus the bulge.
+		{"dumbbell splits", NewRegion(shape(t, "0,0 4,0 4,1.5 6,1.5 6,0 10,0 10,4 6,4 6,2.5 4,2.5 4,4 0,4")),
+			-0.6, 2, 2 * (2.8*2.8 + bulge), 4, 0.6, nil, []ContourRef{0}, nil},
+		// Derived: a hole of radius 1 is gone once the region grows by more than 1; the square
+		// grows as in the rectangle case.
+		{"hole fills", NewRegion(mustRect(t, 10, 10, 0), Circle(V(5, 5), 1).Reverse()),
+			1.5, 1, 13*13 - (4-math.Pi)*2.25, 4, 1.5, []ContourRef{1}, nil, nil},
+		// Derived: a hole whose edge is 1 from the outside breaks through when shrunk by 1.2: the
+		// 7.6² square less the grown hole (2 × 2 with a 1.2 band and round corners) left of the
+		// shrunk side x = 8.8.
+		{"hole breaks out", NewRegion(mustRect(t, 10, 10, 0), Polygon(V(6, 4), V(6, 6), V(8, 6), V(8, 4))),
+			-1.2, 1, 7.6*7.6 - (4 + 4*2*1.2 + math.Pi*1.44 - beyond), 4, 1.2, nil, nil, []ContourRef{0, 1}},
+		// Derived: the hole's circle keeps its centre; its radius grows from 2 to 2.5 as the region
+		// shrinks by 0.5, the outside shrinks to 9 × 9.
+		{"hole arc grows", NewRegion(mustRect(t, 10, 10, 0), Circle(V(5, 5), 2).Reverse()),
+			-0.5, 1, 81 - math.Pi*6.25, 1, 2.5, nil, nil, nil},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			res := checkOffset(t, tc.name, tc.r, tc.d, rand.New(rand.NewSource(1)))
+			if len(res.Regions) != tc.regions {
+				t.Fatalf("regions: got %d, want %d", len(res.Regions), tc.regions)
+			}
+			if tc.area >= 0 {
+				approx(t, "area", totalArea(res.Regions), tc.area, 1e-9)
+			}
+			arcs := 0
+			for _, g := range res.Regions {
+				for _, c := range g.Contours() {
+					for _, s := range c {
+						if s.IsArc() {
+							arcs++
+							approx(t, "arc radius", s.Radius(), tc.radius, 1e-9)
+						}
+					}
+				}
+			}
+			if tc.arcs >= 0 && arcs != tc.arcs {
+				t.Errorf("arcs: got %d, want %d", arcs, tc.arcs)
+			}
+			if !refsEqual(res.Vanished, tc.v) || !refsEqual(res.Split, tc.s) || !refsEqual(res.Merged, tc.m) {
+				t.Errorf("vanished, split, merged: got %v %v %v, want %v %v %v",
+					res.Vanished, res.Split, res.Merged, tc.v, tc.s, tc.m)
+			}
+		})
+	}
+}
+
+func TestOffsetZeroIsIdentity(t *testing.T) {
+	r := NewRegion(mustRect(t, 10, 6, 1), Circle(V(5, 3), 1).Reverse())
+	res := r.Offset(0)
+	if len(res.Regions) != 1 || len(res.Regions[0].Holes) != 1 {
+		t.Fatalf("got %d regions, want the input back", len(res.Regions))
+	}
+	approx(t, "area", res.Regions[0].Area(), r.Area(), 0)
+}
