@@ -154,8 +154,8 @@ func rawOffset(c Contour, d float64) []Segment {
 		j := (i + 1) % n
 		turn := turnAt(c[i], c[j])
 		switch {
-		case math.Abs(turn) <= tangentTurn || math.Abs(turn*d) <= pointTol:
-			snapJoint(offs, ok, i, j)
+		case math.Abs(turn) <= tangentTurn+dirTol(c[i])+dirTol(c[j]) || math.Abs(turn*d) <= pointTol:
+			snapJoint(c[i], c[j], offs, ok, i, j, d)
 		case turn*d > 0:
 			joins[i], hasJoin[i] = cornerJoin(c[i], c[j], offs, ok, i, j, d, turn)
 		case ok[i] && ok[j] && i != j:
@@ -174,12 +174,36 @@ func rawOffset(c Contour, d float64) []Segment {
 	return out
 }
 
-// snapJoint makes the offsets of two segments that meet tangentially start and end at exactly
-// the same point; they differ by rounding or by less than pointTol.
-func snapJoint(offs []Segment, ok []bool, i, j int) {
-	if ok[i] && ok[j] && i != j && offs[i].B.Near(offs[j].A) {
-		offs[j].A = offs[i].B
+// snapJoint makes the offsets of two segments s (index i) and t (index j) that meet
+// tangentially start and end at exactly one point: the joint carried out along the normal of
+// whichever of the two gives the surer direction. They differ only by rounding, which a large
+// offset of a tiny arc magnifies (see dirTol).
+func snapJoint(s, t Segment, offs []Segment, ok []bool, i, j int, d float64) {
+	p := rightOf(s.B, s.Tangent(1), d)
+	if dirTol(t) < dirTol(s) {
+		p = rightOf(s.B, t.Tangent(0), d)
 	}
+	if ok[i] {
+		offs[i].B = p
+	}
+	if ok[j] {
+		offs[j].A = p
+	}
+}
+
+// dirTol returns how far, in radians, the direction of s at its ends may be wrong because its
+// points are rounded to float64: a relative error of a few ε (2.2e-16) on coordinates of the
+// size of the segment's farthest point from the origin, over its length (line) or radius (arc).
+// A fillet of radius 1e-8 at 10 mm from the origin points its ends only to about 1e-7 radians.
+func dirTol(s Segment) float64 {
+	const eps = 4 * 2.2e-16
+	scale := math.Max(1, math.Max(math.Max(math.Abs(s.A.X), math.Abs(s.A.Y)),
+		math.Max(math.Abs(s.B.X), math.Abs(s.B.Y))))
+	size := s.Length()
+	if s.IsArc() {
+		size = s.Radius()
+	}
+	return eps * scale / size
 }
 
 // cornerJoin returns the arc about the corner between segments s (index i) and t (index j) that

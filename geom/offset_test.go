@@ -3,11 +3,12 @@ package geom
 import (
 	"math"
 	"math/rand"
+	"strconv"
 	"testing"
 )
 
-// mustRect returns the w × h rectangle at the origin with corners of radius corner.
-func mustRect(t testing.TB, w, h, corner float64) Contour {
+// offsetRect returns the w × h rectangle at the origin with corners of radius corner.
+func offsetRect(t testing.TB, w, h, corner float64) Contour {
 	t.Helper()
 	c, err := Rect(V(0, 0), V(w, h), corner)
 	if err != nil {
@@ -16,8 +17,8 @@ func mustRect(t testing.TB, w, h, corner float64) Contour {
 	return c
 }
 
-// sameSeg reports whether two segments have the same ends, centre and sweep within tol.
-func sameSeg(a, b Segment, tol float64) bool {
+// sameOffsetSeg reports whether two segments have the same ends, centre and sweep within tol.
+func sameOffsetSeg(a, b Segment, tol float64) bool {
 	if a.IsArc() != b.IsArc() || a.A.Dist(b.A) > tol || a.B.Dist(b.B) > tol {
 		return false
 	}
@@ -51,7 +52,7 @@ func TestOffsetSegment(t *testing.T) {
 			if ok != tc.ok {
 				t.Fatalf("ok: got %v, want %v", ok, tc.ok)
 			}
-			if ok && !sameSeg(got, tc.want, 1e-12) {
+			if ok && !sameOffsetSeg(got, tc.want, 1e-12) {
 				t.Errorf("got %v, want %v", got, tc.want)
 			}
 		})
@@ -60,7 +61,7 @@ func TestOffsetSegment(t *testing.T) {
 
 func TestRawOffsetRectangle(t *testing.T) {
 	const w, h = 10.0, 6.0
-	rect := mustRect(t, w, h, 0)
+	rect := offsetRect(t, w, h, 0)
 	tests := []struct {
 		name       string
 		d          float64
@@ -102,7 +103,7 @@ func TestRawOffsetFilletVanishes(t *testing.T) {
 	// A 10 × 6 rectangle with fillets of 0.5 shrunk by 1: the fillets' offsets vanish and only
 	// the four sides remain, on the lines of the 8 × 4 rectangle x = 1, x = 9, y = 1, y = 5
 	// (derived). They overhang one another; the filter removes the overhangs.
-	raw := rawOffset(mustRect(t, 10, 6, 0.5), -1)
+	raw := rawOffset(offsetRect(t, 10, 6, 0.5), -1)
 	if len(raw) != 4 {
 		t.Fatalf("got %d segments, want 4: %v", len(raw), raw)
 	}
@@ -170,7 +171,7 @@ func TestSegIndexMatchesBruteForce(t *testing.T) {
 }
 
 func TestKeepOffsetPieces(t *testing.T) {
-	idx := newSegIndex([]Contour{mustRect(t, 10, 10, 0)})
+	idx := newSegIndex([]Contour{offsetRect(t, 10, 10, 0)})
 	tests := []struct {
 		name string
 		seg  Segment
@@ -227,8 +228,8 @@ func TestContourFates(t *testing.T) {
 	}
 }
 
-// boundaryDist returns the distance from p to the nearest boundary point of r.
-func boundaryDist(r Region, p Vec) float64 {
+// distToBoundary returns the distance from p to the nearest boundary point of r.
+func distToBoundary(r Region, p Vec) float64 {
 	best := math.Inf(1)
 	for _, c := range r.Contours() {
 		for _, s := range c {
@@ -238,8 +239,8 @@ func boundaryDist(r Region, p Vec) float64 {
 	return best
 }
 
-// totalArea returns the summed area of rs.
-func totalArea(rs []Region) float64 {
+// summedArea returns the summed area of rs.
+func summedArea(rs []Region) float64 {
 	var a float64
 	for _, r := range rs {
 		a += r.Area()
@@ -266,7 +267,7 @@ func checkOffset(t *testing.T, label string, r Region, d float64, rng *rand.Rand
 			for _, s := range c {
 				for _, u := range []float64{0, 0.25, 0.5, 0.75} {
 					p := s.At(u)
-					if got := boundaryDist(r, p); math.Abs(got-math.Abs(d)) > 1e-7 {
+					if got := distToBoundary(r, p); math.Abs(got-math.Abs(d)) > 1e-7 {
 						t.Errorf("%s, d %g: result point %v is %.12g from the boundary, want %g",
 							label, d, p, got, math.Abs(d))
 					}
@@ -281,7 +282,7 @@ func checkOffset(t *testing.T, label string, r Region, d float64, rng *rand.Rand
 	b := r.Bounds().Expand(math.Abs(d) + 1)
 	for k := 0; k < 300; k++ {
 		p := V(b.Min.X+rng.Float64()*(b.Max.X-b.Min.X), b.Min.Y+rng.Float64()*(b.Max.Y-b.Min.Y))
-		dist := boundaryDist(r, p)
+		dist := distToBoundary(r, p)
 		if math.Abs(dist-math.Abs(d)) < 1e-6 {
 			continue // on the offset boundary, within rounding: either answer is right
 		}
@@ -301,8 +302,8 @@ func checkOffset(t *testing.T, label string, r Region, d float64, rng *rand.Rand
 	return res
 }
 
-// refsEqual reports whether two lists of contour references are the same.
-func refsEqual(a, b []ContourRef) bool {
+// sameRefs reports whether two lists of contour references are the same.
+func sameRefs(a, b []ContourRef) bool {
 	if len(a) != len(b) {
 		return false
 	}
@@ -315,8 +316,8 @@ func refsEqual(a, b []ContourRef) bool {
 }
 
 func TestOffsetShapes(t *testing.T) {
-	rect := NewRegion(mustRect(t, 10, 6, 0))
-	rounded := NewRegion(mustRect(t, 10, 6, 0.5))
+	rect := NewRegion(offsetRect(t, 10, 6, 0))
+	rounded := NewRegion(offsetRect(t, 10, 6, 0.5))
 	// Derived: inside a 4 × 4 square shrunk by 0.6 the neck's opening of width 1 leaves a bulge
 	// between the two discs of radius 0.6 about the opening's corners:
 	// 2·∫₀^½ (0.6 − √(0.36 − m²)) dm = 0.6 − (0.5·√0.11 + 0.36·asin(5/6)).
@@ -347,22 +348,22 @@ func TestOffsetShapes(t *testing.T) {
 		// Derived: shrunk by 1 > 0.5 the fillets become sharp corners of the 8 × 4 rectangle.
 		{"fillets sharpen", rounded, -1, 1, 8 * 4, 0, 0, nil, nil, nil},
 		// Derived: 0.6 high, so nothing is 0.4 from every edge.
-		{"thin strip vanishes", NewRegion(mustRect(t, 2, 0.6, 0)), -0.4, 0, 0, 0, 0, []ContourRef{0}, nil, nil},
+		{"thin strip vanishes", NewRegion(offsetRect(t, 2, 0.6, 0)), -0.4, 0, 0, 0, 0, []ContourRef{0}, nil, nil},
 		// Derived: a neck 1 wide vanishes under 0.6; each 4 × 4 end keeps 2.8² plus the bulge.
 		{"dumbbell splits", NewRegion(shape(t, "0,0 4,0 4,1.5 6,1.5 6,0 10,0 10,4 6,4 6,2.5 4,2.5 4,4 0,4")),
 			-0.6, 2, 2 * (2.8*2.8 + bulge), 4, 0.6, nil, []ContourRef{0}, nil},
 		// Derived: a hole of radius 1 is gone once the region grows by more than 1; the square
 		// grows as in the rectangle case.
-		{"hole fills", NewRegion(mustRect(t, 10, 10, 0), Circle(V(5, 5), 1).Reverse()),
+		{"hole fills", NewRegion(offsetRect(t, 10, 10, 0), Circle(V(5, 5), 1).Reverse()),
 			1.5, 1, 13*13 - (4-math.Pi)*2.25, 4, 1.5, []ContourRef{1}, nil, nil},
 		// Derived: a hole whose edge is 1 from the outside breaks through when shrunk by 1.2: the
 		// 7.6² square less the grown hole (2 × 2 with a 1.2 band and round corners) left of the
 		// shrunk side x = 8.8.
-		{"hole breaks out", NewRegion(mustRect(t, 10, 10, 0), Polygon(V(6, 4), V(6, 6), V(8, 6), V(8, 4))),
+		{"hole breaks out", NewRegion(offsetRect(t, 10, 10, 0), Polygon(V(6, 4), V(6, 6), V(8, 6), V(8, 4))),
 			-1.2, 1, 7.6*7.6 - (4 + 4*2*1.2 + math.Pi*1.44 - beyond), 4, 1.2, nil, nil, []ContourRef{0, 1}},
 		// Derived: the hole's circle keeps its centre; its radius grows from 2 to 2.5 as the region
 		// shrinks by 0.5, the outside shrinks to 9 × 9.
-		{"hole arc grows", NewRegion(mustRect(t, 10, 10, 0), Circle(V(5, 5), 2).Reverse()),
+		{"hole arc grows", NewRegion(offsetRect(t, 10, 10, 0), Circle(V(5, 5), 2).Reverse()),
 			-0.5, 1, 81 - math.Pi*6.25, 1, 2.5, nil, nil, nil},
 	}
 	for _, tc := range tests {
@@ -372,7 +373,7 @@ func TestOffsetShapes(t *testing.T) {
 				t.Fatalf("regions: got %d, want %d", len(res.Regions), tc.regions)
 			}
 			if tc.area >= 0 {
-				approx(t, "area", totalArea(res.Regions), tc.area, 1e-9)
+				approx(t, "area", summedArea(res.Regions), tc.area, 1e-9)
 			}
 			arcs := 0
 			for _, g := range res.Regions {
@@ -388,7 +389,7 @@ func TestOffsetShapes(t *testing.T) {
 			if tc.arcs >= 0 && arcs != tc.arcs {
 				t.Errorf("arcs: got %d, want %d", arcs, tc.arcs)
 			}
-			if !refsEqual(res.Vanished, tc.v) || !refsEqual(res.Split, tc.s) || !refsEqual(res.Merged, tc.m) {
+			if !sameRefs(res.Vanished, tc.v) || !sameRefs(res.Split, tc.s) || !sameRefs(res.Merged, tc.m) {
 				t.Errorf("vanished, split, merged: got %v %v %v, want %v %v %v",
 					res.Vanished, res.Split, res.Merged, tc.v, tc.s, tc.m)
 			}
@@ -397,10 +398,131 @@ func TestOffsetShapes(t *testing.T) {
 }
 
 func TestOffsetZeroIsIdentity(t *testing.T) {
-	r := NewRegion(mustRect(t, 10, 6, 1), Circle(V(5, 3), 1).Reverse())
+	r := NewRegion(offsetRect(t, 10, 6, 1), Circle(V(5, 3), 1).Reverse())
 	res := r.Offset(0)
 	if len(res.Regions) != 1 || len(res.Regions[0].Holes) != 1 {
 		t.Fatalf("got %d regions, want the input back", len(res.Regions))
 	}
 	approx(t, "area", res.Regions[0].Area(), r.Area(), 0)
+}
+
+// randomConvexRegion returns a seeded random convex polygon about the origin, some corners rounded:
+// points on a circle at sorted random angles, at least one in every half turn.
+func randomConvexRegion(rng *rand.Rand) Region {
+	for {
+		n := 3 + rng.Intn(12)
+		pts := make([]Vec, n)
+		radii := make([]float64, n)
+		for i := range pts {
+			pts[i] = Polar(V(0, 0), 10, (float64(i)+0.9*rng.Float64())*2*math.Pi/float64(n))
+			if rng.Intn(2) == 0 {
+				radii[i] = 2 * rng.Float64()
+			}
+		}
+		if c, err := RoundedPolygon(pts, radii); err == nil && c.Validate() == nil {
+			return NewRegion(c)
+		}
+	}
+}
+
+func TestOffsetConvexRoundTrip(t *testing.T) {
+	for seed := int64(1); seed <= 40; seed++ {
+		rng := rand.New(rand.NewSource(seed))
+		r := randomConvexRegion(rng)
+		d := 0.2 + 3*rng.Float64()
+		grown := r.Offset(d)
+		if len(grown.Regions) != 1 {
+			t.Fatalf("seed %d: grown by %g: got %d regions, want 1", seed, d, len(grown.Regions))
+		}
+		back := checkOffset(t, "convex back", grown.Regions[0], -d, rng)
+		// Derived: shrinking a convex region's outward offset by the same amount gives it back.
+		approx(t, "seed "+seedText(seed)+" area after +d, −d", summedArea(back.Regions), r.Area(), 1e-7)
+	}
+}
+
+// seedText formats a seed for messages.
+func seedText(n int64) string { return strconv.FormatInt(n, 10) }
+
+func TestOffsetRandomRegions(t *testing.T) {
+	ds := []float64{-4, -1.5, -0.3, 0.3, 1.5, 4, 9}
+	for seed := int64(1); seed <= 60; seed++ {
+		rng := rand.New(rand.NewSource(seed))
+		r := randomRegion(rng)
+		label := "seed " + seedText(seed)
+		prev := 0.0
+		for _, d := range ds {
+			a := summedArea(checkOffset(t, label, r, d, rng).Regions)
+			// Derived: a region only gains points as d grows.
+			if a < prev-1e-9 {
+				t.Errorf("%s: area at d %g is %.9g, less than %.9g at the d before", label, d, a, prev)
+			}
+			prev = a
+		}
+	}
+}
+
+func TestOffsetNearDegenerate(t *testing.T) {
+	tests := []struct {
+		name string
+		c    string
+	}{
+		{"collinear points", "0,0 5,0 10,0 10,3 10,6 5,6 0,6 0,3"},
+		{"nearly collinear, concave", "0,0 5,0.0000001 10,0 10,6 0,6"},
+		{"nearly collinear, convex", "0,0 5,-0.0000001 10,0 10,6 0,6"},
+		{"tiny fillets", "0,0@0.000001 10,0@0.00000001 10,6@0.000001 0,6@0.0000001"},
+		{"very short edge", "0,0 10,0 10,6 0.000001,6 0,5.999999"},
+		{"shorter edge", "0,0 10,0 10,6 0.00000001,6 0,5.99999999"},
+		{"short edge in a concave corner", "0,0 10,0 10,6 5,6 5,3.00000001 4.99999999,3 0,3"},
+		{"sliver spike", "0,0 10,0 10,6 5.0000001,6 5,9 4.9999999,6 0,6"},
+	}
+	rng := rand.New(rand.NewSource(3))
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			r := NewRegion(shape(t, tc.c))
+			for _, d := range []float64{-2.5, -0.5, -1e-6, 1e-6, 0.5, 2.5} {
+				checkOffset(t, tc.name, r, d, rng)
+			}
+		})
+	}
+}
+
+// roughenContour returns c with every line cut at a random point (a collinear vertex) and some lines
+// given a very short first piece, so that offsets meet near-degenerate joints.
+func roughenContour(rng *rand.Rand, c Contour) Contour {
+	var out Contour
+	for _, s := range c {
+		if s.IsArc() {
+			out = append(out, s)
+			continue
+		}
+		cuts := []float64{0.2 + 0.6*rng.Float64()}
+		if rng.Intn(4) == 0 {
+			cuts = append([]float64{1e-7 + 1e-6*rng.Float64()}, cuts...)
+		}
+		a := s.A
+		for _, u := range cuts {
+			p := s.At(u)
+			out = append(out, Line(a, p))
+			a = p
+		}
+		out = append(out, Line(a, s.B))
+	}
+	return out
+}
+
+func TestOffsetRoughenedRegions(t *testing.T) {
+	for seed := int64(1); seed <= 30; seed++ {
+		rng := rand.New(rand.NewSource(seed))
+		r := randomRegion(rng)
+		rough := Region{Outer: roughenContour(rng, r.Outer)}
+		for _, h := range r.Holes {
+			rough.Holes = append(rough.Holes, roughenContour(rng, h))
+		}
+		label := "seed " + seedText(seed)
+		for _, d := range []float64{-1.5, -0.3, 0.3, 1.5} {
+			a := summedArea(checkOffset(t, label, rough, d, rng).Regions)
+			// Derived: cutting lines at collinear points changes no point of the region.
+			approx(t, label+" area of the roughened offset", a, summedArea(r.Offset(d).Regions), 1e-7)
+		}
+	}
 }
