@@ -61,6 +61,20 @@ func (r Region) offset(d float64) (OffsetResult, int) {
 	return res, open
 }
 
+// OffsetRegions offsets every region by d and unites the results that overlap, as separate
+// regions do when they grow into one another. Regions are offset one at a time, so a shrink
+// never joins anything; the union only matters when d > 0.
+func OffsetRegions(rs []Region, d float64) []Region {
+	var all []Region
+	for _, r := range rs {
+		all = append(all, r.Offset(d).Regions...)
+	}
+	if len(all) < 2 {
+		return all
+	}
+	return Union(all...)
+}
+
 // contourFates reads, from the source contour of each piece of each result loop, which of n
 // input contours vanished, split into several loops, or share a loop with another contour.
 func contourFates(n int, srcs [][]int) (vanished, split, merged []ContourRef) {

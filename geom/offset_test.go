@@ -526,3 +526,41 @@ func TestOffsetRoughenedRegions(t *testing.T) {
 		}
 	}
 }
+
+func TestOffsetRegions(t *testing.T) {
+	left := NewRegion(shape(t, "0,0 4,0 4,4 0,4"))
+	right := NewRegion(shape(t, "5,0 9,0 9,4 5,4"))
+	far := NewRegion(shape(t, "20,0 24,0 24,4 20,4"))
+	// Derived: each 4 × 4 square grown by 1 has area 6² − (4 − π). Grown, the two 1 apart
+	// overlap in the strip 4 ≤ x ≤ 5: 4 × 1 plus, above and below, the part of both corner
+	// discs, 2·∫_0.5^1 √(1 − v²) dv each.
+	grown := 36 - (4 - math.Pi)
+	lens := math.Pi/4 - (0.5*math.Sqrt(0.75)+math.Pi/6)/2
+	tests := []struct {
+		name    string
+		rs      []Region
+		d       float64
+		regions int
+		area    float64
+	}{
+		{"grow into one", []Region{left, right}, 1, 1, 2*grown - (4 + 4*lens)},
+		{"grow apart", []Region{left, far}, 1, 2, 2 * grown},
+		// Derived: each square shrinks to 2 × 2 on its own.
+		{"shrink", []Region{left, right}, -1, 2, 8},
+		{"none", nil, 1, 0, 0},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			got := OffsetRegions(tc.rs, tc.d)
+			if len(got) != tc.regions {
+				t.Fatalf("regions: got %d, want %d", len(got), tc.regions)
+			}
+			for i, g := range got {
+				if err := g.Validate(); err != nil {
+					t.Errorf("region %d: %v", i, err)
+				}
+			}
+			approx(t, "area", summedArea(got), tc.area, 1e-9)
+		})
+	}
+}
