@@ -111,8 +111,10 @@ func jointTurn(s, t Segment) float64 {
 // A double normal here is a chord p–q between boundary points that is perpendicular to the
 // boundary at both ends (at a vertex: within the vertex's cone of normals), leaves p into the
 // region, and is the diameter of a disc that lies in the region, touching the boundary at p
-// and q. The disc condition keeps chords that a cutter of that size could never reach (the
-// altitude of a triangle with rounded corners, say) from counting as narrow places.
+// and q. Only vertices that jut into the region (inside angle above 180°) can end one: no disc
+// inside the region touches a corner whose inside angle is below 180°. The disc condition
+// keeps chords that a cutter of that size could never reach (the altitude of a triangle with
+// rounded corners, say) from counting as narrow places.
 //
 // The region should be valid (see Validate).
 func (r Region) NarrowestWidth() (g Gap, ok bool) {
@@ -126,7 +128,8 @@ func (r Region) NarrowestWidth() (g Gap, ok bool) {
 // boundary that face each other across empty space (a hole's narrowest width, a notch or inlet
 // in the outer contour; the space between a hole and the outer edge is NOT a gap — that is
 // material). For a part (material region), it is the largest cutter that can reach everywhere
-// it must cut.
+// it must cut. It is NarrowestWidth of the contours run backwards, which puts the empty side on
+// their left.
 func (r Region) NarrowestGap() (g Gap, ok bool) {
 	n := r.Normalize()
 	var rev []Contour

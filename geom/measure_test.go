@@ -93,6 +93,9 @@ func TestNarrowestWidth(t *testing.T) {
 		// the narrowest place on the line through the tips.
 		{name: "even lens", r: region(t, Contour{ArcThrough(V(0, -4), V(2, 0), V(0, 4)), ArcThrough(V(0, 4), V(-2, 0), V(0, -4))}),
 			ok: true, width: 4, ends: []Vec{V(-2, 0), V(2, 0)}},
+		// Derived: walls 2e-6 rad off parallel (a corner 1e-5 out over 5) still face each other;
+		// the narrowest place is measured at the middle of their common stretch, 4 + 0.5e-5.
+		{name: "walls nearly parallel", r: region(t, shape(t, "0,0 5,0 5,4.00001 0,4")), ok: true, width: 4.000005},
 		// Derived: a triangle narrows only into its corners.
 		{name: "triangle", r: region(t, shape(t, "0,0 4,0 0,3")), ok: false},
 		// Derived: nor does one with rounded corners (its altitudes are longer than any disc in it).
@@ -164,6 +167,14 @@ func TestSharpestCorners(t *testing.T) {
 		// Derived: a 3-4-5 triangle's sharpest corner is atan(3/4) at (4, 0).
 		{name: "triangle", r: region(t, shape(t, "0,0 4,0 0,3")),
 			concave: want{}, convex: want{true, 0, math.Atan2(3, 4) * 180 / math.Pi, V(4, 0)}, checkConvexPlace: true},
+		// Derived: a joint turning by 4e-9 rad is smooth, not a corner; one turning by 4e-3 rad
+		// (a dent of 0.01 over 5) is a corner of 180° + 2·atan(0.002). The slope sharpens the
+		// corners at either end of the dented edge to 90° − atan(slope).
+		{name: "nearly straight joint", r: region(t, shape(t, "0,0 5,0.00000001 10,0 10,5 0,5")),
+			concave: want{}, convex: want{ok: true, angle: 90 - math.Atan(2e-9)*180/math.Pi}},
+		{name: "shallow dent", r: region(t, shape(t, "0,0 5,0.01 10,0 10,5 0,5")),
+			concave: want{true, 0, 180 + 2*math.Atan(0.002)*180/math.Pi, V(5, 0.01)},
+			convex:  want{ok: true, angle: 90 - math.Atan(0.002)*180/math.Pi}},
 		// Derived: a slot's ends are its tightest bends.
 		{name: "slot", r: region(t, Capsule(V(0, 0), V(5, 0), 0.4)),
 			concave: want{}, convex: want{ok: true, radius: 0.4}},
@@ -213,6 +224,30 @@ func TestCornersIgnoreOrientation(t *testing.T) {
 	// Derived: the L's narrowest place is either arm, 5 wide.
 	if g, ok := r.NarrowestWidth(); !ok || math.Abs(g.Width-5) > 1e-9 {
 		t.Errorf("width: got %+v %v, want 5", g, ok)
+	}
+}
+
+// TestRectangleAnyWayRound checks seeded random rectangles, turned and moved anywhere: the
+// width is the shorter side (derived), there is no gap, and the corners are right angles.
+func TestRectangleAnyWayRound(t *testing.T) {
+	for seed := int64(1); seed <= 200; seed++ {
+		rng := rand.New(rand.NewSource(seed))
+		w, h := 0.01+50*rng.Float64(), 0.01+50*rng.Float64()
+		c, err := Rect(V(0, 0), V(w, h), 0)
+		if err != nil {
+			t.Fatalf("seed %d: %v", seed, err)
+		}
+		tr := Rotate(Degrees(360 * rng.Float64())).Then(Translate(V(100*rng.Float64(), -100*rng.Float64())))
+		r := NewRegion(c).Transform(tr)
+		if g, ok := r.NarrowestWidth(); !ok || math.Abs(g.Width-math.Min(w, h)) > 1e-9 {
+			t.Errorf("seed %d: %g×%g: width got %g (%v), want %g", seed, w, h, g.Width, ok, math.Min(w, h))
+		}
+		if g, ok := r.NarrowestGap(); ok {
+			t.Errorf("seed %d: gap got %+v, want none", seed, g)
+		}
+		if k, ok := r.SharpestConvexCorner(); !ok || math.Abs(k.Angle-math.Pi/2) > 1e-9 {
+			t.Errorf("seed %d: convex corner got %+v (%v), want 90°", seed, k, ok)
+		}
 	}
 }
 
