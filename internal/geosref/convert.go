@@ -188,6 +188,28 @@ func Area(ps []Polygon) float64 {
 	return a
 }
 
+// ringLength returns the length of a closed ring.
+func ringLength(pts [][2]float64) float64 {
+	var l float64
+	for i, p := range pts {
+		q := pts[(i+1)%len(pts)]
+		l += math.Hypot(q[0]-p[0], q[1]-p[1])
+	}
+	return l
+}
+
+// Perimeter returns the length of every ring of ps.
+func Perimeter(ps []Polygon) float64 {
+	var l float64
+	for _, p := range ps {
+		l += ringLength(p.Outer)
+		for _, h := range p.Holes {
+			l += ringLength(h)
+		}
+	}
+	return l
+}
+
 // Vertices returns how many corners ps have in all.
 func Vertices(ps []Polygon) int {
 	n := 0
