@@ -65,7 +65,14 @@ func (c Contour) Winding(p Vec) int {
 	var turn float64
 	for _, s := range c {
 		a, b := s.A.Sub(p), s.B.Sub(p)
-		turn += math.Atan2(a.Cross(b), a.Dot(b))
+		cross, dot := a.Cross(b), a.Dot(b)
+		if s.IsArc() && dot < 0 && math.Abs(cross) <= pointTol*a.Sub(b).Len() {
+			// p sits on an arc's chord: seen from p the arc turns exactly half a turn, the
+			// way the arc runs. atan2 would pick ±π from the sign of a zero.
+			turn += math.Copysign(math.Pi, s.Sweep)
+			continue
+		}
+		turn += math.Atan2(cross, dot)
 		if s.IsArc() && s.inCircularSegment(p) {
 			turn += math.Copysign(2*math.Pi, s.Sweep)
 		}

@@ -70,6 +70,26 @@ func TestContains(t *testing.T) {
 	}
 }
 
+func TestContainsOnArcChord(t *testing.T) {
+	// A lens of two radius-5 arcs about (±3, 0): its corners are (0, ±4) and its centre lies
+	// on both arcs' chords (derived: 5² − 3² = 4²).
+	lens := Contour{ArcFrom(V(0, -4), V(-3, 0), 2*math.Atan2(4, 3)), ArcFrom(V(0, 4), V(3, 0), 2*math.Atan2(4, 3))}
+	if err := lens.Validate(); err != nil {
+		t.Fatal(err)
+	}
+	for _, tc := range []struct {
+		p    Vec
+		want bool
+	}{{V(0, 0), true}, {V(0, 3.9), true}, {V(1.9, 0), true}, {V(2.1, 0), false}, {V(0, 4.1), false}} {
+		if got := lens.Contains(tc.p); got != tc.want {
+			t.Errorf("Contains(%v): got %v, want %v", tc.p, got, tc.want)
+		}
+		if got := lens.Reverse().Contains(tc.p); got != tc.want {
+			t.Errorf("reversed Contains(%v): got %v, want %v", tc.p, got, tc.want)
+		}
+	}
+}
+
 func TestWindingMatchesAreaSign(t *testing.T) {
 	rng := rand.New(rand.NewSource(7))
 	for k := 0; k < 50; k++ {
