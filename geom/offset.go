@@ -55,7 +55,7 @@ func (r Region) offset(d float64) (OffsetResult, int) {
 		groups[i] = rawOffset(c, d)
 	}
 	kept := keepOffsetPieces(splitPieces(groups), newSegIndex(cs), math.Abs(d))
-	loops, srcs, open := chainLoops(kept)
+	loops, srcs, open := chainLoops(pruneDangling(kept))
 	res := OffsetResult{Regions: assemble(loops)}
 	res.Vanished, res.Split, res.Merged = contourFates(len(cs), srcs)
 	return res, open
@@ -151,10 +151,11 @@ func turnAt(s, t Segment) float64 {
 }
 
 // rawOffset returns the raw offset curves of contour c at distance d, in order along the
-// contour: each segment's offset, a join arc of radius |d| about every corner where the offsets
-// move apart (the contour turns the same way as the offset side: left for d > 0, right for
-// d < 0), and, at corners where they overlap, the two neighbouring offsets trimmed to the
-// crossing nearest the corner. Anything else that overlaps is left for the filter.
+// contour: each segment's offset, and a join arc of radius |d| about every corner where the
+// offsets move apart (the contour turns the same way as the offset side: left for d > 0,
+// right for d < 0). Where neighbouring offsets overlap instead, at concave corners and across
+// arcs whose offset vanished, both are trimmed to their crossing nearest the gap. Anything
+// else that overlaps is left for the filter.
 func rawOffset(c Contour, d float64) []Segment {
 	n := len(c)
 	offs := make([]Segment, n)
@@ -172,8 +173,6 @@ func rawOffset(c Contour, d float64) []Segment {
 			snapJoint(c[i], c[j], offs, ok, i, j, d)
 		case turn*d > 0:
 			joins[i], hasJoin[i] = cornerJoin(c[i], c[j], offs, ok, i, j, d, turn)
-		case ok[i] && ok[j] && i != j:
-			trimCorner(&offs[i], &offs[j])
 		}
 	}
 	out := make([]Segment, 0, 2*n)
@@ -183,6 +182,11 @@ func rawOffset(c Contour, d float64) []Segment {
 		}
 		if hasJoin[i] {
 			out = append(out, joins[i])
+		}
+	}
+	for k := range out {
+		if next := (k + 1) % len(out); next != k && out[k].B != out[next].A {
+			trimCorner(&out[k], &out[next])
 		}
 	}
 	return out
@@ -238,10 +242,11 @@ func cornerJoin(s, t Segment, offs []Segment, ok []bool, i, j int, d, turn float
 	return join, join.Length() > pointTol
 }
 
-// trimCorner cuts the offsets a (before a concave corner) and b (after it) back to the crossing
-// nearest the corner, when they cross within both. Their overhanging ends lie nearer than |d|
-// to the corner's segments, so the filter would drop them anyway; trimming here keeps nearly
-// straight concave corners, where that overhang is within rounding of |d|, from leaving spurs.
+// trimCorner cuts the raw offsets a and b, which follow one another along the contour but do
+// not meet, back to their crossing nearest the gap, when they cross within both. The overhangs
+// lie nearer than |d| to the boundary between their sources, so the filter would drop them
+// anyway; trimming here keeps nearly straight concave corners, where an overhang's distance
+// is within rounding of |d|, from leaving spurs the filter cannot see.
 func trimCorner(a, b *Segment) {
 	best, found := crossing{}, false
 	bestGap := math.Inf(1)
@@ -275,6 +280,80 @@ func keepOffsetPieces(ps []piece, idx *segIndex, dist float64) []piece {
 		}
 	}
 	return kept
+}
+
+// pruneDangling returns ps less every piece that cannot lie on a closed loop: one that ends
+// where no piece starts, or starts where none ends, repeatedly. Every piece of an exact offset
+// lies on a loop. A piece that does not is the overhang of a nearly straight concave joint
+// that no trimming reached, whose distance to the boundary is within rounding of |d| so the
+// filter kept it; left in, it could lead chainLoops into a dead end.
+func pruneDangling(ps []piece) []piece {
+	ids := map[Vec]int32{}
+	id := func(p Vec) int32 {
+		k, ok := ids[p]
+		if !ok {
+			k = int32(len(ids))
+			ids[p] = k
+		}
+		return k
+	}
+	from, to := make([]int32, len(ps)), make([]int32, len(ps))
+	for i, p := range ps {
+		from[i], to[i] = id(p.seg.A), id(p.seg.B)
+	}
+	outs, ins := make([]int32, len(ids)), make([]int32, len(ids))
+	for i := range ps {
+		outs[from[i]]++
+		ins[to[i]]++
+	}
+	leaving, arriving := byNode(from, len(ids)), byNode(to, len(ids))
+	var queue []int32
+	for i := range ps {
+		if outs[to[i]] == 0 || ins[from[i]] == 0 {
+			queue = append(queue, int32(i))
+		}
+	}
+	gone := make([]bool, len(ps))
+	for len(queue) > 0 {
+		i := queue[len(queue)-1]
+		queue = queue[:len(queue)-1]
+		if gone[i] {
+			continue
+		}
+		gone[i] = true
+		if outs[from[i]]--; outs[from[i]] == 0 {
+			queue = append(queue, arriving(from[i])...)
+		}
+		if ins[to[i]]--; ins[to[i]] == 0 {
+			queue = append(queue, leaving(to[i])...)
+		}
+	}
+	kept := ps[:0:0]
+	for i, p := range ps {
+		if !gone[i] {
+			kept = append(kept, p)
+		}
+	}
+	return kept
+}
+
+// byNode groups item indices by the node each names (node[i] for item i) and returns a lookup
+// of the items at a node, in compressed rows: no map, two allocations.
+func byNode(node []int32, nodes int) func(int32) []int32 {
+	first := make([]int32, nodes+1)
+	for _, n := range node {
+		first[n+1]++
+	}
+	for k := 1; k <= nodes; k++ {
+		first[k] += first[k-1]
+	}
+	items := make([]int32, len(node))
+	fill := append([]int32(nil), first[:nodes]...)
+	for i, n := range node {
+		items[fill[n]] = int32(i)
+		fill[n]++
+	}
+	return func(n int32) []int32 { return items[first[n]:first[n+1]] }
 }
 
 // segIndexLeaf is how many consecutive segments share one leaf box of a segIndex: enough to

@@ -564,3 +564,41 @@ func TestOffsetRegions(t *testing.T) {
 		})
 	}
 }
+
+func TestPruneDangling(t *testing.T) {
+	sq := Polygon(V(0, 0), V(1, 0), V(1, 1), V(0, 1))
+	var ps []piece
+	for _, s := range sq {
+		ps = append(ps, piece{seg: s})
+	}
+	spur := piece{seg: Line(V(1, 1), V(2, 2))} // leaves the square and leads nowhere
+	back := piece{seg: Line(V(2, 2), V(3, 2))} // continues the spur, still nowhere
+	orphan := piece{seg: Line(V(5, 5), V(6, 5))}
+	ring := piece{seg: Circle(V(9, 9), 1)[0]} // a full circle closes on itself
+	got := pruneDangling(append(append([]piece{}, ps...), spur, back, orphan, ring))
+	// Derived: only the square's four sides and the circle lie on closed loops.
+	if len(got) != 5 {
+		t.Fatalf("got %d pieces, want 5: %v", len(got), got)
+	}
+	for _, p := range got {
+		onLoop := p.seg == ring.seg
+		for _, s := range sq {
+			onLoop = onLoop || p.seg == s
+		}
+		if !onLoop {
+			t.Errorf("kept %v, which is on no loop", p.seg)
+		}
+	}
+}
+
+func TestOffsetFineOutline(t *testing.T) {
+	// Outlines of thousands of short edges, smooth and jagged, offset by far more than an edge:
+	// offsets of neighbouring edges overlap many times over.
+	for _, jitter := range []float64{0.01, 0.5} {
+		r := benchBlob(t, 1000, jitter)
+		rng := rand.New(rand.NewSource(5))
+		for _, d := range []float64{-0.5, 0.5} {
+			checkOffset(t, "blob jitter "+strconv.FormatFloat(jitter, 'g', -1, 64), r, d, rng)
+		}
+	}
+}
