@@ -21,16 +21,31 @@ type element struct {
 	r       float64
 }
 
-// name says which element is meant in messages.
+// name says which element is meant in a message about its own feature.
 func (e element) name() string {
 	switch {
 	case e.hole:
 		return "hole at " + pt(e.at.X, e.at.Y)
 	case e.f.Kind == KindGroove:
-		return "groove near " + pt(e.at.X, e.at.Y)
+		return "the groove near " + pt(e.at.X, e.at.Y)
+	}
+	return "the " + kindWords[e.f.Kind]
+}
+
+// fullName says which element is meant in a message about another feature.
+func (e element) fullName() string {
+	switch {
+	case e.hole && e.f.Name != "":
+		return fmt.Sprintf("hole at %s of %s", pt(e.at.X, e.at.Y), e.f.Label())
+	case e.f.Kind == KindGroove:
+		return fmt.Sprintf("%s near %s", e.f.Label(), pt(e.at.X, e.at.Y))
 	}
 	return e.f.Label()
 }
+
+// kindWords names each kind in running text.
+var kindWords = map[Kind]string{KindProfile: "profile", KindCutout: "cut-out", KindPocket: "pocket",
+	KindHoles: "holes", KindSlot: "slot", KindGroove: "groove"}
 
 // elementsOf breaks features into elements.
 func elementsOf(fs []Feature) []element {
@@ -127,13 +142,13 @@ func pairProblem(a, b element, o Options) (Problem, bool) {
 		}
 		if outer.f.Opening() {
 			return problemf(Warning, inner.f, "%s lies inside %s, where there is no metal left to cut",
-				inner.name(), outer.name()), true
+				inner.name(), outer.fullName()), true
 		}
 		return Problem{}, false // a hole or slot in a pocket floor, a step in a pocket: fine
 	}
 	if amount < o.MinWall && a.f.Kind != KindGroove && b.f.Kind != KindGroove {
 		return amountf(Warning, b.f, amount, "%s leaves a wall of only %s to %s (less than %s)",
-			b.name(), mm(amount), a.name(), mm(o.MinWall)), true
+			b.name(), mm(amount), a.fullName(), mm(o.MinWall)), true
 	}
 	return Problem{}, false
 }
@@ -160,12 +175,12 @@ func crossProblem(a, b element, amount float64) Problem {
 	if a.f.Opening() && b.f.Opening() || a.hole && b.hole {
 		sev = Error
 	}
-	verb := fmt.Sprintf("overlaps %s by %s", a.name(), mm(amount))
+	verb := fmt.Sprintf("overlaps %s by %s", a.fullName(), mm(amount))
 	if amount <= touchTol {
-		verb = "touches " + a.name()
+		verb = "touches " + a.fullName()
 	}
 	if b.f.Kind == KindGroove || a.f.Kind == KindGroove {
-		verb = "crosses " + a.name()
+		verb = "crosses " + a.fullName()
 	}
 	return amountf(sev, b.f, amount, "%s %s", b.name(), verb)
 }

@@ -49,9 +49,18 @@ func relate(a, b geom.Contour) (relation, float64) {
 
 // reach returns how far the points of b lie beyond a's boundary: inside a when inside is true,
 // outside it otherwise. It is 0 when b does not cross to that side.
+//
+// The farthest point is found among points of b sampled within probeTol, and the points of b's
+// arcs that face a's segments square on, where the extreme of a smooth stretch lies exactly.
 func reach(b, a geom.Contour, inside bool) float64 {
+	pts := b.Flatten(probeTol)
+	for _, s := range b {
+		for _, t := range a {
+			pts = append(pts, normalPoints(s, t)...)
+		}
+	}
 	var far float64
-	for _, p := range b.Flatten(probeTol) {
+	for _, p := range pts {
 		if a.Contains(p) != inside {
 			continue
 		}

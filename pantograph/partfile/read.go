@@ -55,7 +55,7 @@ func Read(name string, src []byte) (pantograph.Part, error) {
 		return pantograph.Part{}, &Error{File: name, Msg: "not valid TOML: " + err.Error()}
 	}
 	r := &reader{file: name, lines: indexLines(string(src)), scale: 1}
-	top := table{r: r, label: "the top of the file", m: m}
+	top := table{r: r, m: m}
 	if err := top.checkKeys(topKeys...); err != nil {
 		return pantograph.Part{}, err
 	}
@@ -183,7 +183,7 @@ func (r *reader) readFeatures(top table, p *pantograph.Part) error {
 		}
 		list, ok := v.([]map[string]any)
 		if !ok {
-			return top.at(string(k)).errf("write [[%s]] with double brackets, once for each %s", k, k)
+			return top.at(string(k)).errf("write [[%s]] with double brackets, once for each feature of the kind", k)
 		}
 		for i, m := range list {
 			f, err := r.readFeature(k, i, m)

@@ -101,6 +101,9 @@ func (s *scanner) document() {
 			prefix = name + "#" + strconv.Itoa(s.counts[name])
 			s.counts[name]++
 			s.idx[prefix] = s.line
+			if _, seen := s.idx[name]; !seen {
+				s.idx[name] = s.line // the array as a whole is where it first appears
+			}
 		case s.peek() == '[':
 			s.pos++
 			prefix = s.keyUntil("]")
@@ -211,14 +214,14 @@ func (s *scanner) value(path string) {
 	case '{':
 		s.next()
 		for {
-			s.skipSpace(false)
-			if s.done() || s.peek() == '}' || s.peek() == '\n' {
+			s.skipSpace(true) // TOML 1.1 lets inline tables run over several lines
+			if s.done() || s.peek() == '}' {
 				s.next()
 				return
 			}
 			start := s.pos
 			s.keyValue(path)
-			s.skipSpace(false)
+			s.skipSpace(true)
 			if s.peek() == ',' || s.pos == start {
 				s.next()
 			}

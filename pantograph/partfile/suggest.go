@@ -5,6 +5,10 @@ import (
 	"strings"
 )
 
+// prefixLen is how many leading letters an unknown key must share with a known key for the
+// known key to be offered when more than maxSuggestDistance edits apart: "thru" for "through".
+const prefixLen = 3
+
 // maxSuggestDistance is the largest number of single-letter edits between an unknown key and a
 // known one for the known one to be offered as what was meant: two catches a dropped, doubled or
 // swapped letter (a swap is two edits) without offering unrelated keys (common practice in
@@ -17,6 +21,11 @@ func unknownKeyMsg(key, table string, known []string) string {
 	for _, k := range known {
 		if d := editDistance(key, k); d < bestD {
 			best, bestD = k, d
+		}
+	}
+	for _, k := range known {
+		if best == "" && len(key) >= prefixLen && strings.HasPrefix(k, key[:prefixLen]) {
+			best = k
 		}
 	}
 	if best != "" {

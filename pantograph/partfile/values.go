@@ -68,8 +68,12 @@ func (t table) checkKeys(known ...string) error {
 	slices.SortFunc(bad, func(a, b string) int {
 		return t.r.lines.line(join(t.path, a)) - t.r.lines.line(join(t.path, b))
 	})
+	where := t.label
+	if where == "" {
+		where = "the top level of the file"
+	}
 	l := t.at(bad[0])
-	return &Error{File: t.r.file, Line: t.r.lines.line(l.path), Msg: unknownKeyMsg(bad[0], t.label, known)}
+	return &Error{File: t.r.file, Line: t.r.lines.line(l.path), Msg: unknownKeyMsg(bad[0], where, known)}
 }
 
 // has reports whether the table sets key.
