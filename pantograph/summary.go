@@ -103,7 +103,10 @@ func partArea(p Part) float64 {
 }
 
 // cutterLimits measures the smallest inside corner radius and the narrowest gap, feature by
-// feature: the profile seen from outside, each milled feature from inside.
+// feature: the profile seen from outside, each milled feature from inside. For features that lie
+// apart inside the profile this is the same as measuring the profile less the milled openings
+// as one region, and it says which feature each limit comes from. Where openings overlap, a
+// corner that one opening swallows of another is still counted, so the measure errs tight.
 func cutterLimits(p Part) (radius, gap Measure) {
 	if c, ok := p.Profile.Region.SharpestConcaveCorner(); ok {
 		radius = Measure{MM: c.Radius, Feature: p.Profile.Label(), At: c.At, Found: true}

@@ -14,30 +14,12 @@ var slotKeys = []string{"from", "to", "width"}
 
 // outline reads the one shape key of t (or, when slots is true, a slot's keys) as a region.
 func (t table) outline(slots bool) (geom.Region, error) {
-	var found []string
-	for _, k := range shapeKeys {
-		if t.has(k) {
-			found = append(found, k)
-		}
-	}
-	if slots && (t.has("from") || t.has("to") || t.has("width")) {
-		found = append(found, "from/to/width")
-	}
-	switch {
-	case len(found) == 0 && slots:
-		return geom.Region{}, t.errf("no shape: give one of points, circle, rect or path, or a slot's from, to and width")
-	case len(found) == 0:
-		return geom.Region{}, t.errf("no shape: give one of points, circle, rect or path")
-	case len(found) > 1:
-		second := found[1]
-		if second == "from/to/width" {
-			second = firstPresent(t, slotKeys)
-		}
-		return geom.Region{}, t.at(second).errf("give only one shape, found both %s and %s", found[0], found[1])
+	key, err := t.shapeKey(slots)
+	if err != nil {
+		return geom.Region{}, err
 	}
 	var c geom.Contour
-	var err error
-	switch found[0] {
+	switch key {
 	case "points":
 		c, err = t.at("points").polygon(t.m["points"])
 	case "circle":
@@ -55,6 +37,33 @@ func (t table) outline(slots bool) (geom.Region, error) {
 		return geom.Region{}, err
 	}
 	return geom.NewRegion(c), nil
+}
+
+// shapeKey returns which shape key t uses, or "from/to/width" for a slot, and complains when
+// there is none or more than one.
+func (t table) shapeKey(slots bool) (string, error) {
+	var found []string
+	for _, k := range shapeKeys {
+		if t.has(k) {
+			found = append(found, k)
+		}
+	}
+	if slots && (t.has("from") || t.has("to") || t.has("width")) {
+		found = append(found, "from/to/width")
+	}
+	switch {
+	case len(found) == 0 && slots:
+		return "", t.errf("no shape: give one of points, circle, rect or path, or a slot's from, to and width")
+	case len(found) == 0:
+		return "", t.errf("no shape: give one of points, circle, rect or path")
+	case len(found) > 1:
+		second := found[1]
+		if second == "from/to/width" {
+			second = firstPresent(t, slotKeys)
+		}
+		return "", t.at(second).errf("give only one shape, found both %s and %s", found[0], found[1])
+	}
+	return found[0], nil
 }
 
 func firstPresent(t table, keys []string) string {
