@@ -27,6 +27,7 @@ func DefaultOptions() Options { return Options{MinWall: DefaultMinWall} }
 func Check(p Part, o Options) []Problem {
 	var ps []Problem
 	ps = append(ps, checkStock(p)...)
+	ps = append(ps, checkNames(p)...)
 	good := []Feature{}
 	for _, f := range p.All() {
 		fs := checkFeature(f, p.Stock)
@@ -41,6 +42,18 @@ func Check(p Part, o Options) []Problem {
 		ps = append(ps, checkPairs(es, o)...)
 	}
 	return sortProblems(ps)
+}
+
+// sound returns the features (the profile first, when it is sound) that pass their own checks,
+// the only ones whose geometry the later checks and measures may trust.
+func sound(p Part) []Feature {
+	var good []Feature
+	for _, f := range p.All() {
+		if !HasErrors(checkFeature(f, p.Stock)) {
+			good = append(good, f)
+		}
+	}
+	return good
 }
 
 // All returns the profile followed by the other features.
@@ -72,6 +85,21 @@ func checkStock(p Part) []Problem {
 			Message: "stock thickness must be greater than 0, got " + num(t)}}
 	}
 	return nil
+}
+
+// checkNames warns when two features of one kind share a name: messages and plans name
+// features, and two alike leave the reader guessing which is meant.
+func checkNames(p Part) []Problem {
+	var ps []Problem
+	seen := map[string]bool{}
+	for _, f := range p.Features {
+		l := f.Label()
+		if seen[l] && f.Name != "" {
+			ps = append(ps, problemf(Warning, f, "another %s has the same name; give each its own", "[["+string(f.Kind)+"]]"))
+		}
+		seen[l] = true
+	}
+	return ps
 }
 
 // checkFeature looks at one feature on its own: sizes, depth and outline.

@@ -97,6 +97,8 @@ func TestCheck(t *testing.T) {
 		{"blind hole crossing a pocket edge", plate(rectFeature(KindPocket, "seat", geom.V(2, 2), geom.V(4, 4), 0, Depth{MM: 0.3}),
 			holes("h", 1, Depth{MM: 0.5}, geom.V(6, 4))),
 			Warning, `hole at (6, 4) overlaps [[pocket]] "seat" by 0.5 mm`, 0.5}, // derived: half the hole lies in the pocket
+		{"two features named alike", plate(holes("a", 1, through, geom.V(5, 5)), holes("a", 1, through, geom.V(10, 5))),
+			Warning, "another [[holes]] has the same name", math.NaN()},
 		{"groove off the part", plate(Feature{Name: "mark", Kind: KindGroove, Path: []geom.Vec{geom.V(19, 5), geom.V(21, 5)}, Depth: Depth{MM: 0.05}}),
 			Error, "the groove near (19, 5) breaks through the profile edge", math.NaN()},
 		{"groove across a window", plate(circleCutout("window", geom.V(10, 5), 2),

@@ -58,12 +58,16 @@ func Summarize(p Part, o Options) Summary {
 		}
 		s.Features = append(s.Features, FeatureInfo{Name: f.Name, Kind: f.Kind, Label: f.Label(), Count: n})
 	}
-	if p.Profile.Region.Validate() != nil {
+	good := sound(p)
+	if len(good) == 0 || good[0].Kind != KindProfile {
 		return s
 	}
-	s.Bounds = p.Profile.Region.Bounds()
-	s.Area = partArea(p)
-	s.MinInsideRadius, s.NarrowestGap = cutterLimits(p)
+	// Measure only what passed its own checks: a hole of negative size has no area to take.
+	q := p
+	q.Features = good[1:]
+	s.Bounds = q.Profile.Region.Bounds()
+	s.Area = partArea(q)
+	s.MinInsideRadius, s.NarrowestGap = cutterLimits(q)
 	return s
 }
 

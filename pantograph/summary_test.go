@@ -25,6 +25,10 @@ func TestSummarizeArea(t *testing.T) {
 		{"slots", plate(slotFeature("s", geom.V(2, 5), geom.V(6, 5), 1, through),
 			slotFeature("b", geom.V(2, 8), geom.V(6, 8), 1, Depth{MM: 0.2})),
 			200 - 4 - math.Pi/4},
+		// derived: 200 − π·0.5²; the hole of negative size is left out, not subtracted
+		{"bad features left out", plate(holes("good", 1, through, geom.V(5, 5)), holes("bad", -1, through, geom.V(8, 5)),
+			Feature{Name: "empty", Kind: KindCutout, Depth: through}),
+			200 - math.Pi/4},
 		// derived: two unit-diameter holes overlapping by half a radius; the lens they share is
 		// 2r²·acos(d/2r) − (d/2)·√(4r² − d²) with r = 0.5, d = 0.75
 		{"overlapping holes counted once", plate(holes("a", 1, through, geom.V(5, 5), geom.V(5.75, 5))),
