@@ -16,6 +16,7 @@ const grooveProbe = 1e-3
 type element struct {
 	f       Feature
 	outline geom.Contour
+	box     geom.Box // of the outline
 	hole    bool     // a drilled hole: a circle of radius r about at
 	at      geom.Vec // hole centre, or start of a groove stretch
 	r       float64
@@ -49,6 +50,15 @@ var kindWords = map[Kind]string{KindProfile: "profile", KindCutout: "cut-out", K
 
 // elementsOf breaks features into elements.
 func elementsOf(fs []Feature) []element {
+	es := outlinesOf(fs)
+	for i := range es {
+		es[i].box = es[i].outline.Bounds()
+	}
+	return es
+}
+
+// outlinesOf makes the elements of each feature.
+func outlinesOf(fs []Feature) []element {
 	var es []element
 	for _, f := range fs {
 		switch f.Kind {
@@ -107,7 +117,7 @@ func checkPairs(es []element, o Options) []Problem {
 			if !a.hole && sameFeature(a, b) {
 				continue
 			}
-			if !a.outline.Bounds().Expand(o.MinWall).Overlaps(b.outline.Bounds()) {
+			if !a.box.Expand(o.MinWall).Overlaps(b.box) {
 				continue
 			}
 			if p, ok := pairProblem(a, b, o); ok {
