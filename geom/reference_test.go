@@ -12,8 +12,9 @@ import (
 )
 
 // These tests check geom's exact offsets and booleans against GEOS, an independent polygon
-// engine, on seeded random regions. Run them with `go test -tags reference ./geom` on a
-// machine with libgeos-dev.
+// engine, on seeded random regions with arcs, and on polygons made from them (for which GEOS
+// gets exactly geom's input). Run them with `go test -tags reference ./geom` on a machine with
+// libgeos-dev.
 //
 // GEOS works on polygons, so each input is first flattened: every arc becomes chords whose
 // ends lie on the arc and which stray at most refChordTol from it. GEOS then approximates the
@@ -286,23 +287,49 @@ func validInGEOS(rs []Region) error {
 	return nil
 }
 
+// refPolygonTol is the chord tolerance, mm, at which TestReferenceOffset also turns each random
+// region into a polygon of its own: coarse enough that arcs become runs of corners turning by a
+// few degrees, nearly straight, which is where offsets are easiest to get wrong; GEOS then gets
+// exactly the same input as geom.
+const refPolygonTol = 0.01
+
+// polygonal returns r with every contour replaced by chords within refPolygonTol.
+func polygonal(r Region) Region {
+	p := NewRegion(r.Outer.FlattenContour(refPolygonTol))
+	for _, h := range r.Holes {
+		p.Holes = append(p.Holes, h.FlattenContour(refPolygonTol))
+	}
+	return p.Normalize()
+}
+
 func TestReferenceOffset(t *testing.T) {
-	for _, d := range refOffsets {
-		t.Run(fmt.Sprintf("d=%g", d), func(t *testing.T) {
-			fates, widest, used := 0, 0.0, 0.0
-			for seed := int64(1); seed <= refRegionCount; seed++ {
-				r := randomRegion(rand.New(rand.NewSource(seed)))
-				res := r.Offset(d)
-				if len(res.Vanished)+len(res.Split)+len(res.Merged) > 0 {
-					fates++
+	for _, tc := range []struct {
+		name   string
+		region func(seed int64) Region
+	}{
+		{"curved", func(seed int64) Region { return randomRegion(rand.New(rand.NewSource(seed))) }},
+		{"polygonal", func(seed int64) Region {
+			return polygonal(randomRegion(rand.New(rand.NewSource(seed))))
+		}},
+	} {
+		for _, d := range refOffsets {
+			t.Run(fmt.Sprintf("%s/d=%g", tc.name, d), func(t *testing.T) {
+				fates, widest, used := 0, 0.0, 0.0
+				for seed := int64(1); seed <= refRegionCount; seed++ {
+					r := tc.region(seed)
+					res := r.Offset(d)
+					if len(res.Vanished)+len(res.Split)+len(res.Merged) > 0 {
+						fates++
+					}
+					lo, hi, diff := checkOffsetAgainstGEOS(t, seed, r, d, res)
+					widest = math.Max(widest, hi-lo)
+					used = math.Max(used, math.Max(diff/hi, diff/lo))
 				}
-				lo, hi, diff := checkOffsetAgainstGEOS(t, seed, r, d, res)
-				widest = math.Max(widest, hi-lo)
-				used = math.Max(used, math.Max(diff/hi, diff/lo))
-			}
-			t.Logf("%d regions, %d with a contour that vanished, split or merged; widest bound %.3g mm²; at most %.0f%% of a bound used",
-				refRegionCount, fates, widest, 100*used)
-		})
+				t.Logf("%d regions, %d with a contour that vanished, split or merged; "+
+					"widest bound %.3g mm²; at most %.0f%% of a bound used",
+					refRegionCount, fates, widest, 100*used)
+			})
+		}
 	}
 }
 
@@ -344,7 +371,7 @@ func shiftedPair(seed int64) (Region, Region) {
 }
 
 func TestReferenceBooleans(t *testing.T) {
-	for _, tc := range []struct {
+	ops := []struct {
 		name string
 		ours func(a, b []Region) []Region
 		geos func(a, b []geosref.Polygon) ([]geosref.Polygon, error)
@@ -354,36 +381,59 @@ func TestReferenceBooleans(t *testing.T) {
 			func(a, b []geosref.Polygon) ([]geosref.Polygon, error) { return geosref.Union(append(a, b...)...) }},
 		{"difference", Difference, geosref.Difference},
 		{"intersection", Intersection, geosref.Intersection},
-	} {
-		t.Run(tc.name, func(t *testing.T) {
-			widest, used := 0.0, 0.0
-			for seed := int64(1); seed <= refRegionCount; seed++ {
-				a, b := shiftedPair(seed)
-				ra, rb := []Region{a}, []Region{b}
-				res := tc.ours(ra, rb)
-				theirs, err := tc.geos(toGEOSAll(ra, refChordTol), toGEOSAll(rb, refChordTol))
-				if err != nil {
-					t.Fatalf("seed %d: GEOS: %v", seed, err)
-				}
-				ours, _ := areaOf(res)
-				geos := geosref.Area(theirs)
-				bound := flatLoss(ra, refChordTol) + flatLoss(rb, refChordTol) + 1e-9*math.Max(ours, 1)
-				if diff := ours - geos; math.IsNaN(diff) || math.Abs(diff) > bound {
-					t.Errorf("seed %d: area got %.9g, GEOS %.9g: difference %.3g, want at most %.3g",
-						seed, ours, geos, diff, bound)
-				}
-				op, oh, gp, gh := pieceCounts(res, theirs, 2*bound)
-				if op != gp || oh != gh {
-					t.Errorf("seed %d: got %d regions with %d holes, GEOS %d with %d", seed, op, oh, gp, gh)
-				}
-				if err := validInGEOS(res); err != nil {
-					t.Errorf("seed %d: %v", seed, err)
-				}
-				widest = math.Max(widest, bound)
-				used = math.Max(used, math.Abs(ours-geos)/bound)
-			}
-			t.Logf("%d pairs; widest bound %.3g mm²; at most %.0f%% of a bound used",
-				refRegionCount, widest, 100*used)
-		})
 	}
+	shapes := []struct {
+		name string
+		pair func(seed int64) (Region, Region)
+	}{
+		{"curved", shiftedPair},
+		// On polygons GEOS gets exactly geom's input and the bound is rounding alone.
+		{"polygonal", func(seed int64) (Region, Region) {
+			a, b := shiftedPair(seed)
+			return polygonal(a), polygonal(b)
+		}},
+	}
+	for _, sh := range shapes {
+		for _, op := range ops {
+			t.Run(sh.name+"/"+op.name, func(t *testing.T) {
+				widest, used := 0.0, 0.0
+				for seed := int64(1); seed <= refRegionCount; seed++ {
+					a, b := sh.pair(seed)
+					bound, diff := checkBooleanAgainstGEOS(t, seed, []Region{a}, []Region{b}, op.ours, op.geos)
+					widest = math.Max(widest, bound)
+					used = math.Max(used, math.Abs(diff)/bound)
+				}
+				t.Logf("%d pairs; widest bound %.3g mm²; at most %.0f%% of a bound used",
+					refRegionCount, widest, 100*used)
+			})
+		}
+	}
+}
+
+// checkBooleanAgainstGEOS compares one boolean operation with GEOS's on the flattened operands,
+// and returns the bound on |ours − GEOS| and the difference itself.
+func checkBooleanAgainstGEOS(t *testing.T, seed int64, ra, rb []Region,
+	ours func(a, b []Region) []Region,
+	geos func(a, b []geosref.Polygon) ([]geosref.Polygon, error)) (bound, diff float64) {
+	t.Helper()
+	res := ours(ra, rb)
+	theirs, err := geos(toGEOSAll(ra, refChordTol), toGEOSAll(rb, refChordTol))
+	if err != nil {
+		t.Fatalf("seed %d: GEOS: %v", seed, err)
+	}
+	area, _ := areaOf(res)
+	gArea := geosref.Area(theirs)
+	bound = flatLoss(ra, refChordTol) + flatLoss(rb, refChordTol) + 1e-9*math.Max(area, 1)
+	if diff = area - gArea; math.IsNaN(diff) || math.Abs(diff) > bound {
+		t.Errorf("seed %d: area got %.9g, GEOS %.9g: difference %.3g, want at most %.3g",
+			seed, area, gArea, diff, bound)
+	}
+	op, oh, gp, gh := pieceCounts(res, theirs, 2*bound)
+	if op != gp || oh != gh {
+		t.Errorf("seed %d: got %d regions with %d holes, GEOS %d with %d", seed, op, oh, gp, gh)
+	}
+	if err := validInGEOS(res); err != nil {
+		t.Errorf("seed %d: %v", seed, err)
+	}
+	return bound, diff
 }
