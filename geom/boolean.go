@@ -162,7 +162,23 @@ func clusters(boxes []Box) [][]int {
 }
 
 // solve combines one cluster of inputs: rs[:na] is the first operand, rs[na:] the second.
+// When the kept pieces do not close into loops, which happens where boundaries of different
+// inputs run within about snapTol of each other without quite meeting, it welds such near
+// points together and tries once more, keeping whichever attempt left fewer pieces open.
 func solve(op boolOp, rs []Region, na int, boxes []Box) []Region {
+	out, open := solveOnce(op, rs, na, boxes)
+	if open == 0 {
+		return out
+	}
+	if again, still := solveOnce(op, weld(rs), na, boxes); still < open {
+		return again
+	}
+	return out
+}
+
+// solveOnce cuts, judges, chains and assembles, and reports how many kept pieces could not
+// be closed into loops.
+func solveOnce(op boolOp, rs []Region, na int, boxes []Box) ([]Region, int) {
 	groups := make([][]Segment, len(rs))
 	for i, r := range rs {
 		for _, c := range r.Contours() {
@@ -170,34 +186,175 @@ func solve(op boolOp, rs []Region, na int, boxes []Box) []Region {
 		}
 	}
 	ar := newArrangement(splitPieces(groups), na, boxes)
-	loops, _, _ := chainLoops(ar.answer(op))
-	return assemble(loops)
+	loops, _, open := chainLoops(ar.answer(op))
+	return assemble(dropSlivers(loops)), open
+}
+
+// dropSlivers removes loops whose mean width, twice the area over the perimeter, is below
+// weldTol. Such slivers arise where inputs run a few snapTol apart; they are far below anything
+// a cutter or printer can make, and their two sides are too close for Validate to tell apart.
+func dropSlivers(loops []Contour) []Contour {
+	out := loops[:0]
+	for _, l := range loops {
+		if 2*math.Abs(l.Area()) >= weldTol*l.Perimeter() {
+			out = append(out, l)
+		}
+	}
+	return out
+}
+
+// weldTol is how close end points of segments must be for weld to merge them: ten times
+// snapTol, so that points splitPieces might or might not merge (one snapTol apart, or a
+// chain of such steps) are merged for certain, while still a hundred times below a
+// micrometre.
+const weldTol = 10 * snapTol
+
+// weld returns the regions with every segment end point moved onto the first end point
+// (in input order) within weldTol of it, merging chains of near points. Arcs keep their
+// sweep and get the centre that fits their new end points; segments that shrink to nothing
+// are dropped.
+func weld(rs []Region) []Region {
+	w := newWelder()
+	for _, r := range rs {
+		for _, c := range r.Contours() {
+			for _, s := range c {
+				w.add(s.A)
+			}
+		}
+	}
+	out := make([]Region, len(rs))
+	for i, r := range rs {
+		out[i].Outer = w.contour(r.Outer)
+		for _, h := range r.Holes {
+			if h = w.contour(h); len(h) > 0 {
+				out[i].Holes = append(out[i].Holes, h)
+			}
+		}
+	}
+	return out
+}
+
+// welder merges points within weldTol of each other, transitively, through a hash grid and
+// union–find; the earliest point added represents its group.
+type welder struct {
+	pts    []Vec
+	parent []int
+	cells  map[[2]int64][]int
+	index  map[Vec]int
+}
+
+func newWelder() *welder {
+	return &welder{cells: map[[2]int64][]int{}, index: map[Vec]int{}}
+}
+
+func (w *welder) cell(p Vec) [2]int64 {
+	return [2]int64{int64(math.Floor(p.X / weldTol)), int64(math.Floor(p.Y / weldTol))}
+}
+
+func (w *welder) find(i int) int {
+	for w.parent[i] != i {
+		w.parent[i] = w.parent[w.parent[i]]
+		i = w.parent[i]
+	}
+	return i
+}
+
+// add records p and joins it to every earlier point within weldTol.
+func (w *welder) add(p Vec) {
+	if _, ok := w.index[p]; ok {
+		return
+	}
+	i := len(w.pts)
+	w.pts, w.parent, w.index[p] = append(w.pts, p), append(w.parent, i), i
+	c := w.cell(p)
+	for dx := int64(-1); dx <= 1; dx++ {
+		for dy := int64(-1); dy <= 1; dy++ {
+			for _, j := range w.cells[[2]int64{c[0] + dx, c[1] + dy}] {
+				if w.pts[j].Dist(p) <= weldTol {
+					ri, rj := w.find(i), w.find(j)
+					w.parent[max(ri, rj)] = min(ri, rj)
+				}
+			}
+		}
+	}
+	w.cells[c] = append(w.cells[c], i)
+}
+
+// at returns the point that represents p's group, or p when it was never added.
+func (w *welder) at(p Vec) Vec {
+	i, ok := w.index[p]
+	if !ok {
+		return p
+	}
+	return w.pts[w.find(i)]
+}
+
+// contour returns c with its end points welded; each segment ends where the next starts.
+func (w *welder) contour(c Contour) Contour {
+	out := make(Contour, 0, len(c))
+	for k, s := range c {
+		a, b := w.at(s.A), w.at(c[(k+1)%len(c)].A)
+		if t, ok := moveEnds(s, a, b); ok {
+			out = append(out, t)
+		}
+	}
+	return out
+}
+
+// moveEnds returns s with end points a and b. An arc keeps its sweep and takes the centre
+// that puts both ends on one circle; a full circle moves as a whole. It reports false when
+// the segment has shrunk to nothing.
+func moveEnds(s Segment, a, b Vec) (Segment, bool) {
+	if !s.IsArc() {
+		return Line(a, b), !a.Near(b)
+	}
+	if a == s.A && b == s.B {
+		return s, true
+	}
+	if math.Abs(s.Sweep) > 1.9*math.Pi {
+		// Nearly or fully round: the chord says little about the centre, so shift it with
+		// the ends instead.
+		d := a.Sub(s.A).Add(b.Sub(s.B)).Mul(0.5)
+		return Segment{A: a, B: b, Center: s.Center.Add(d), Sweep: s.Sweep}, true
+	}
+	chord := b.Sub(a)
+	l := chord.Len()
+	if l <= pointTol {
+		return s, false
+	}
+	c := a.Lerp(b, 0.5).Add(chord.Perp().Mul(0.5 / math.Tan(s.Sweep/2)))
+	return Segment{A: a, B: b, Center: c, Sweep: s.Sweep}, true
 }
 
 // arrangement is the cut-up boundaries of one cluster of inputs, with what is needed to
 // tell which inputs cover each side of a piece.
 type arrangement struct {
-	pieces []piece
-	na     int
+	pieces []piece           // ordered by src
+	first  []int             // input j's pieces are pieces[first[j]:first[j+1]]
+	na     int               // inputs below na belong to the first operand
 	boxes  []Box             // each input's bounds
-	grid   boxGrid           // finds the inputs whose bounds hold a point
-	byInp  [][]Segment       // each input's pieces
-	locs   []*windingLocator // built on first use
-	twins  map[[2]Vec][]int  // pieces by their (unordered) end points
+	grid   boxGrid           // finds the inputs whose bounds may hold a point
+	locs   []*windingLocator // each input's, built on first use
 }
 
 func newArrangement(ps []piece, na int, boxes []Box) *arrangement {
-	ar := &arrangement{
-		pieces: ps, na: na, boxes: boxes, grid: newBoxGrid(boxes),
-		byInp: make([][]Segment, len(boxes)), locs: make([]*windingLocator, len(boxes)),
-		twins: make(map[[2]Vec][]int, len(ps)),
+	bySrc := func(a, b int) bool { return ps[a].src < ps[b].src }
+	if !sort.SliceIsSorted(ps, bySrc) {
+		sort.SliceStable(ps, bySrc)
 	}
-	for i, p := range ps {
-		ar.byInp[p.src] = append(ar.byInp[p.src], p.seg)
-		k := endKey(p.seg)
-		ar.twins[k] = append(ar.twins[k], i)
+	first := make([]int, len(boxes)+1)
+	for _, p := range ps {
+		first[p.src+1]++
 	}
-	return ar
+	for j := 1; j < len(first); j++ {
+		first[j] += first[j-1]
+	}
+	wide := make([]Box, len(boxes))
+	for j, b := range boxes {
+		wide[j] = b.Expand(coincideTol)
+	}
+	return &arrangement{pieces: ps, first: first, na: na, boxes: wide, grid: newBoxGrid(wide),
+		locs: make([]*windingLocator, len(boxes))}
 }
 
 // endKey identifies a piece by its end points in either order; splitPieces leaves pieces
@@ -233,35 +390,30 @@ func (ar *arrangement) answer(op boolOp) []piece {
 }
 
 // sides counts, for each operand, the inputs covering the ground just left and just right of
-// piece i. It reports false when an input listed earlier has the same piece on its boundary:
-// that input's piece speaks for both, so a shared edge is kept at most once.
+// piece i. An input whose boundary runs along the piece covers one side only. sides reports
+// false when an input listed earlier has the same piece on its boundary: that input's piece
+// speaks for both, so a shared edge is kept at most once.
 func (ar *arrangement) sides(i int) (left, right [2]int, ok bool) {
 	p := ar.pieces[i]
 	left[operandOf(p.src, ar.na)]++ // inputs lie to the left of their own boundary
-	m, tan := p.seg.Mid(), p.seg.Tangent(0.5)
-	var on []int // inputs whose boundary this piece runs along
-	for _, j := range ar.twins[endKey(p.seg)] {
-		q := ar.pieces[j]
-		if q.src == p.src || q.seg.Mid().Dist(m) > coincideTol {
-			continue
-		}
-		if q.src < p.src {
-			return left, right, false
-		}
-		on = append(on, q.src)
-		if q.seg.Tangent(0.5).Dot(tan) > 0 {
-			left[operandOf(q.src, ar.na)]++
-		} else {
-			right[operandOf(q.src, ar.na)]++
-		}
-	}
+	m := p.seg.Mid()
+	key := endKey(p.seg)
+	twin := func(q int) int { return ar.twinDir(p.seg, key, m, q) }
 	for _, j := range ar.grid.at(m) {
 		j := int(j)
-		if j == p.src || !ar.boxes[j].ContainsPoint(m) || hasInt(on, j) {
+		if j == p.src || !ar.boxes[j].ContainsPoint(m) {
 			continue
 		}
-		if ar.locator(j).winding(m) != 0 {
-			k := operandOf(j, ar.na)
+		w, along := ar.locator(j).probe(m, twin)
+		k := operandOf(j, ar.na)
+		switch {
+		case along != 0 && j < p.src:
+			return left, right, false
+		case along > 0:
+			left[k]++
+		case along < 0:
+			right[k]++
+		case w != 0:
 			left[k]++
 			right[k]++
 		}
@@ -269,26 +421,36 @@ func (ar *arrangement) sides(i int) (left, right [2]int, ok bool) {
 	return left, right, true
 }
 
-func hasInt(xs []int, x int) bool {
-	for _, y := range xs {
-		if y == x {
-			return true
-		}
+// twinDir reports whether piece q lies on s (whose end key and midpoint are given): +1 when
+// it runs the same way, −1 the opposite way, 0 when it is another piece.
+func (ar *arrangement) twinDir(s Segment, key [2]Vec, m Vec, q int) int {
+	t := ar.pieces[q].seg
+	if endKey(t) != key || t.Mid().Dist(m) > coincideTol {
+		return 0
 	}
-	return false
+	if t.Tangent(0.5).Dot(s.Tangent(0.5)) > 0 {
+		return 1
+	}
+	return -1
 }
 
 // locator returns the winding locator of input j, building it the first time.
 func (ar *arrangement) locator(j int) *windingLocator {
 	if ar.locs[j] == nil {
-		ar.locs[j] = newWindingLocator(ar.byInp[j])
+		segs := make([]Segment, 0, ar.first[j+1]-ar.first[j])
+		for _, p := range ar.pieces[ar.first[j]:ar.first[j+1]] {
+			segs = append(segs, p.seg)
+		}
+		ar.locs[j] = newWindingLocator(segs, ar.first[j])
 	}
 	return ar.locs[j]
 }
 
 // windingLocator counts how often closed boundaries wind around a point by casting a ray to
-// +x and adding up the signed crossings. The boundaries are kept as pieces that only rise or
-// only fall, sorted into horizontal strips so that a ray meets only the pieces of its strip.
+// +x and adding up the signed crossings. The boundaries are kept as parts that only rise or
+// only fall, sorted into horizontal strips so that a ray meets only the parts of its strip.
+// While it casts, it also looks for a part that runs through the point, which the caller
+// judges (see probe).
 type windingLocator struct {
 	parts []monotonePart
 	y0, h float64
@@ -299,14 +461,15 @@ type windingLocator struct {
 // monotonePart is a line, or an arc within one quarter of its circle between the top and the
 // bottom, so that every height between its ends is reached exactly once.
 type monotonePart struct {
-	a, b   Vec     // ends, as in the piece, so neighbours share them exactly
-	lo, hi float64 // heights of the lower and upper end
-	xmax   float64 // rightmost x reached
-	dir    int     // +1 rising from a to b, −1 falling
-	arc    bool
-	c      Vec     // centre of an arc
-	r2     float64 // squared radius of an arc
-	side   float64 // +1 for the right half of the circle, −1 for the left
+	a, b       Vec     // ends, as in the piece, so neighbours share them exactly
+	lo, hi     float64 // heights of the lower and upper end
+	xmin, xmax float64 // leftmost and rightmost x reached
+	dir        int     // +1 rising from a to b, −1 falling, 0 level
+	arc        bool
+	c          Vec     // centre of an arc
+	r2         float64 // squared radius of an arc
+	side       float64 // +1 for the right half of the circle, −1 for the left
+	piece      int     // the piece it is part of
 }
 
 // crossX returns where the part is at height y, which lies between its ends.
@@ -318,30 +481,30 @@ func (m *monotonePart) crossX(y float64) float64 {
 	return m.c.X + m.side*math.Sqrt(math.Max(0, m.r2-dy*dy))
 }
 
-func newWindingLocator(segs []Segment) *windingLocator {
-	l := &windingLocator{}
-	for _, s := range segs {
-		for _, part := range monotone(s) {
-			if mp, ok := newMonotonePart(part); ok {
-				l.parts = append(l.parts, mp)
-			}
+// newWindingLocator indexes the closed boundaries made of segs, which are pieces numbered
+// from first on.
+func newWindingLocator(segs []Segment, first int) *windingLocator {
+	l := &windingLocator{parts: make([]monotonePart, 0, 2*len(segs))}
+	var buf []Segment
+	for k, s := range segs {
+		buf = appendMonotone(buf[:0], s)
+		for _, part := range buf {
+			l.parts = append(l.parts, newMonotonePart(part, first+k))
 		}
 	}
 	l.fillStrips()
 	return l
 }
 
-// newMonotonePart describes a piece that only rises or only falls; flat pieces are dropped
-// because a horizontal ray never crosses them.
-func newMonotonePart(s Segment) (monotonePart, bool) {
-	m := monotonePart{a: s.A, b: s.B, xmax: s.Bounds().Max.X, arc: s.IsArc()}
+func newMonotonePart(s Segment, piece int) monotonePart {
+	b := s.Bounds()
+	m := monotonePart{a: s.A, b: s.B, lo: b.Min.Y, hi: b.Max.Y, xmin: b.Min.X, xmax: b.Max.X,
+		arc: s.IsArc(), piece: piece}
 	switch {
 	case s.B.Y > s.A.Y:
 		m.dir, m.lo, m.hi = 1, s.A.Y, s.B.Y
 	case s.B.Y < s.A.Y:
 		m.dir, m.lo, m.hi = -1, s.B.Y, s.A.Y
-	default:
-		return m, false
 	}
 	if m.arc {
 		m.c = s.Center
@@ -349,29 +512,33 @@ func newMonotonePart(s Segment) (monotonePart, bool) {
 		m.r2 = r * r
 		m.side = math.Copysign(1, s.Mid().X-s.Center.X)
 	}
-	return m, true
+	return m
 }
 
-// monotone cuts an arc at the top and bottom of its circle, where it turns from rising to
-// falling; lines are returned as they are. The cut pieces share their cut points exactly.
-func monotone(s Segment) []Segment {
+// appendMonotone appends s cut at the top and bottom of its circle, where an arc turns from
+// rising to falling; a line is appended as it is. The cut parts share their cut points
+// exactly.
+func appendMonotone(dst []Segment, s Segment) []Segment {
 	if !s.IsArc() {
-		return []Segment{s}
+		return append(dst, s)
 	}
-	var ts []float64
+	var ts [2]float64
+	n := 0
 	for _, a := range [2]float64{math.Pi / 2, -math.Pi / 2} {
 		if t, ok := s.angleParam(a); ok && t > 0 && t < 1 {
-			ts = append(ts, t)
+			ts[n] = t
+			n++
 		}
 	}
-	sort.Float64s(ts)
-	out := make([]Segment, 0, len(ts)+1)
+	if n == 2 && ts[1] < ts[0] {
+		ts[0], ts[1] = ts[1], ts[0]
+	}
 	t0 := 0.0
-	for _, t := range ts {
-		out = append(out, s.Sub(t0, t))
+	for _, t := range ts[:n] {
+		dst = append(dst, s.Sub(t0, t))
 		t0 = t
 	}
-	return append(out, s.Sub(t0, 1))
+	return append(dst, s.Sub(t0, 1))
 }
 
 // fillStrips sorts the parts into horizontal strips. The strip count is chosen so that parts
@@ -387,12 +554,12 @@ func (l *windingLocator) fillStrips() {
 		k = max(1, min(n, int(2*float64(n)*(hi-lo)/span)))
 	}
 	l.y0, l.h = lo, (hi-lo)/float64(k)
-	if l.h <= 0 {
+	if !(l.h > 0) {
 		l.h = 1
 	}
 	l.start = make([]int32, k+1)
 	for _, p := range l.parts {
-		for s := l.strip(p.lo); s <= l.strip(p.hi); s++ {
+		for s := l.strip(p.lo - coincideTol); s <= l.strip(p.hi+coincideTol); s++ {
 			l.start[s+1]++
 		}
 	}
@@ -402,7 +569,7 @@ func (l *windingLocator) fillStrips() {
 	l.items = make([]int32, l.start[k])
 	fill := append([]int32(nil), l.start[:k]...)
 	for i, p := range l.parts {
-		for s := l.strip(p.lo); s <= l.strip(p.hi); s++ {
+		for s := l.strip(p.lo - coincideTol); s <= l.strip(p.hi+coincideTol); s++ {
 			l.items[fill[s]] = int32(i)
 			fill[s]++
 		}
@@ -420,29 +587,33 @@ func (l *windingLocator) strip(y float64) int {
 	return max(0, min(k-1, s))
 }
 
-// winding returns how many times the boundaries wind counter-clockwise around p. Each part
-// counts from its lower end up to but not including its upper end, so a ray through the point
-// where two parts meet counts it once, or not at all where the boundary only touches the ray.
-// The answer is meaningless for p on a boundary.
-func (l *windingLocator) winding(p Vec) int {
+// probe returns how many times the boundaries wind counter-clockwise around p, and the first
+// non-zero answer of along for a part whose box reaches within coincideTol of p (along is
+// given the part's piece number; nil asks nothing). Each part counts crossings from its lower
+// end up to but not including its upper end, so a ray through the point where two parts meet
+// counts it once, or not at all where the boundary only touches the ray. The winding is
+// meaningless for p on a boundary.
+func (l *windingLocator) probe(p Vec, along func(piece int) int) (w, on int) {
 	if len(l.parts) == 0 {
-		return 0
+		return 0, 0
 	}
 	s := l.strip(p.Y)
-	w := 0
 	for _, i := range l.items[l.start[s]:l.start[s+1]] {
 		m := &l.parts[i]
-		if m.xmax <= p.X {
+		if m.xmax < p.X-coincideTol {
 			break // the rest lie wholly left of p
 		}
-		if p.Y < m.lo || p.Y >= m.hi {
+		if p.Y < m.lo-coincideTol || p.Y > m.hi+coincideTol {
 			continue
 		}
-		if m.crossX(p.Y) > p.X {
+		if m.dir != 0 && p.Y >= m.lo && p.Y < m.hi && m.crossX(p.Y) > p.X {
 			w += m.dir
 		}
+		if on == 0 && along != nil && p.X >= m.xmin-coincideTol {
+			on = along(m.piece)
+		}
 	}
-	return w
+	return w, on
 }
 
 // boxGrid is a uniform grid over a set of boxes listing, for each cell, the boxes that reach
