@@ -370,15 +370,20 @@ func shiftedPair(seed int64) (Region, Region) {
 	return a, b.Transform(Translate(shift))
 }
 
+// unionOurs and unionGEOS unite two operands, in the form the other two operations take.
+func unionOurs(a, b []Region) []Region { return Union(append(a, b...)...) }
+
+func unionGEOS(a, b []geosref.Polygon) ([]geosref.Polygon, error) {
+	return geosref.Union(append(a, b...)...)
+}
+
 func TestReferenceBooleans(t *testing.T) {
 	ops := []struct {
 		name string
 		ours func(a, b []Region) []Region
 		geos func(a, b []geosref.Polygon) ([]geosref.Polygon, error)
 	}{
-		{"union",
-			func(a, b []Region) []Region { return Union(append(a, b...)...) },
-			func(a, b []geosref.Polygon) ([]geosref.Polygon, error) { return geosref.Union(append(a, b...)...) }},
+		{"union", unionOurs, unionGEOS},
 		{"difference", Difference, geosref.Difference},
 		{"intersection", Intersection, geosref.Intersection},
 	}
@@ -436,4 +441,20 @@ func checkBooleanAgainstGEOS(t *testing.T, seed int64, ra, rb []Region,
 		t.Errorf("seed %d: %v", seed, err)
 	}
 	return bound, diff
+}
+
+// TestReferenceDenseOutline checks one offset and one union of outlines with thousands of short,
+// jittered edges, as a traced drawing has, where an offset join overlaps many neighbours.
+func TestReferenceDenseOutline(t *testing.T) {
+	const n = 3000 // vertices per outline; GEOS needs a fraction of a second here
+	r := refBenchStar(1, Vec{}, n, 20)
+	for _, d := range []float64{0.5, -0.5} {
+		t.Run(fmt.Sprintf("offset d=%g", d), func(t *testing.T) {
+			checkOffsetAgainstGEOS(t, 1, r, d, r.Offset(d))
+		})
+	}
+	t.Run("union", func(t *testing.T) {
+		other := refBenchStar(2, V(6, 2), n, 20)
+		checkBooleanAgainstGEOS(t, 1, []Region{r}, []Region{other}, unionOurs, unionGEOS)
+	})
 }
