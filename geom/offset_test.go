@@ -1,6 +1,7 @@
 package geom
 
 import (
+	"fmt"
 	"math"
 	"math/rand"
 	"strconv"
@@ -322,6 +323,7 @@ func TestOffsetShapes(t *testing.T) {
 	// between the two discs of radius 0.6 about the opening's corners:
 	// 2·∫₀^½ (0.6 − √(0.36 − m²)) dm = 0.6 − (0.5·√0.11 + 0.36·asin(5/6)).
 	bulge := 0.6 - (0.5*math.Sqrt(0.11) + 0.36*math.Asin(5.0/6))
+	dumbbell := shape(t, "0,0 4,0 4,1.5 6,1.5 6,0 10,0 10,4 6,4 6,2.5 4,2.5 4,4 0,4")
 	// Derived: the part of that grown hole beyond x = 8.8, 0.8 past its right side's corner
 	// centres: a 0.4 × 2 strip and two pieces of quarter discs of radius 1.2,
 	// ∫_0.8^1.2 √(1.44 − x²) dx = π·1.44/4 − (0.8·√0.8 + 1.44·asin(2/3))/2.
@@ -350,12 +352,16 @@ func TestOffsetShapes(t *testing.T) {
 		// Derived: 0.6 high, so nothing is 0.4 from every edge.
 		{"thin strip vanishes", NewRegion(offsetRect(t, 2, 0.6, 0)), -0.4, 0, 0, 0, 0, []ContourRef{0}, nil, nil},
 		// Derived: a neck 1 wide vanishes under 0.6; each 4 × 4 end keeps 2.8² plus the bulge.
-		{"dumbbell splits", NewRegion(shape(t, "0,0 4,0 4,1.5 6,1.5 6,0 10,0 10,4 6,4 6,2.5 4,2.5 4,4 0,4")),
+		{"dumbbell splits", NewRegion(dumbbell),
 			-0.6, 2, 2 * (2.8*2.8 + bulge), 4, 0.6, nil, []ContourRef{0}, nil},
 		// Derived: a hole of radius 1 is gone once the region grows by more than 1; the square
 		// grows as in the rectangle case.
 		{"hole fills", NewRegion(offsetRect(t, 10, 10, 0), Circle(V(5, 5), 1).Reverse()),
 			1.5, 1, 13*13 - (4-math.Pi)*2.25, 4, 1.5, []ContourRef{1}, nil, nil},
+		// Derived: a dumbbell-shaped hole splits in two as the region grows by 0.6, each part
+		// as the dumbbell's ends above; the 20 × 10 outside grows as the rectangle does.
+		{"hole splits", NewRegion(offsetRect(t, 20, 10, 0), dumbbell.Transform(Translate(V(5, 3)))),
+			0.6, 1, 21.2*11.2 - (4-math.Pi)*0.36 - 2*(2.8*2.8+bulge), 8, 0.6, nil, []ContourRef{1}, nil},
 		// Derived: a hole whose edge is 1 from the outside breaks through when shrunk by 1.2: the
 		// 7.6² square less the grown hole (2 × 2 with a 1.2 band and round corners) left of the
 		// shrunk side x = 8.8.
@@ -601,4 +607,18 @@ func TestOffsetFineOutline(t *testing.T) {
 			checkOffset(t, "blob jitter "+strconv.FormatFloat(jitter, 'g', -1, 64), r, d, rng)
 		}
 	}
+}
+
+func ExampleRegion_Offset() {
+	plate, _ := Rect(V(0, 0), V(10, 6), 0)
+	res := NewRegion(plate).Offset(1.5)
+	arcs := 0
+	for _, s := range res.Regions[0].Outer {
+		if s.IsArc() && math.Abs(s.Radius()-1.5) < 1e-9 {
+			arcs++
+		}
+	}
+	// (10 + 3)(6 + 3) − (4 − π)·1.5²: the corners are rounded.
+	fmt.Printf("%d corner arcs of radius 1.5, area %.4f\n", arcs, res.Regions[0].Area())
+	// Output: 4 corner arcs of radius 1.5, area 115.0686
 }
