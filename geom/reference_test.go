@@ -81,11 +81,6 @@ const refQuadSegs = 64
 // refRegionCount is how many seeded random regions each reference test checks.
 const refRegionCount = 200
 
-// refOffsets are the offsets tried on each region, mm: small enough to keep every feature,
-// large enough to close every hole (holes are 1 to 3 mm across the narrow way) or to split
-// spiky outlines and merge holes with each other and the outside.
-var refOffsets = []float64{8, 3, 0.7, -0.7, -3, -8}
-
 // toGEOS flattens r for GEOS.
 func toGEOS(r Region, tol float64) geosref.Polygon {
 	rings := flatRings(r, tol)
@@ -312,7 +307,10 @@ func TestReferenceOffset(t *testing.T) {
 			return polygonal(randomRegion(rand.New(rand.NewSource(seed))))
 		}},
 	} {
-		for _, d := range refOffsets {
+		// Offsets, mm: small enough to keep every feature, large enough to close every hole
+		// (holes are 1 to 3 mm across the narrow way) or to split spiky outlines and merge
+		// holes with each other and with the outside.
+		for _, d := range []float64{8, 3, 0.7, -0.7, -3, -8} {
 			t.Run(fmt.Sprintf("%s/d=%g", tc.name, d), func(t *testing.T) {
 				fates, widest, used := 0, 0.0, 0.0
 				for seed := int64(1); seed <= refRegionCount; seed++ {
