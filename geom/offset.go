@@ -272,8 +272,9 @@ func trimCorner(a, b *Segment) {
 // the original boundary. A kept piece also lies on the right side: it was carried out from the
 // boundary along a normal (or about a convex corner) by dist, and the straight path back to
 // where it came from cannot cross the boundary without bringing it nearer than dist.
+// It filters ps in place.
 func keepOffsetPieces(ps []piece, idx *segIndex, dist float64) []piece {
-	kept := ps[:0:0]
+	kept := ps[:0]
 	for _, p := range ps {
 		if !idx.nearerThan(p.seg.Mid(), dist-offsetKeepTol) {
 			kept = append(kept, p)
@@ -286,7 +287,7 @@ func keepOffsetPieces(ps []piece, idx *segIndex, dist float64) []piece {
 // where no piece starts, or starts where none ends, repeatedly. Every piece of an exact offset
 // lies on a loop. A piece that does not is the overhang of a nearly straight concave joint
 // that no trimming reached, whose distance to the boundary is within rounding of |d| so the
-// filter kept it; left in, it could lead chainLoops into a dead end.
+// filter kept it; left in, it could lead chainLoops into a dead end. It filters ps in place.
 func pruneDangling(ps []piece) []piece {
 	ids := map[Vec]int32{}
 	id := func(p Vec) int32 {
@@ -328,7 +329,7 @@ func pruneDangling(ps []piece) []piece {
 			queue = append(queue, leaving(to[i])...)
 		}
 	}
-	kept := ps[:0:0]
+	kept := ps[:0] // in place: kept never passes i
 	for i, p := range ps {
 		if !gone[i] {
 			kept = append(kept, p)
