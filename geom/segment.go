@@ -31,12 +31,15 @@ func Arc(center Vec, radius, start, sweep float64) Segment {
 	return ArcFrom(Polar(center, radius, start), center, sweep)
 }
 
-// ArcThrough returns the arc from a through m to b, or a line when the three are collinear.
+// ArcThrough returns the arc from a through m to b, or a line when m lies within pointTol of
+// the straight line a–b.
 func ArcThrough(a, m, b Vec) Segment {
-	d := 2 * (a.X*(m.Y-b.Y) + m.X*(b.Y-a.Y) + b.X*(a.Y-m.Y))
-	if math.Abs(d) < pointTol*pointTol {
+	// Within pointTol of the chord the three points are one line: the circle through them
+	// would be astronomically large and its centre meaningless.
+	if ab := b.Sub(a); math.Abs(ab.Cross(m.Sub(a))) <= pointTol*ab.Len() {
 		return Line(a, b)
 	}
+	d := 2 * (a.X*(m.Y-b.Y) + m.X*(b.Y-a.Y) + b.X*(a.Y-m.Y))
 	a2, m2, b2 := a.Dot(a), m.Dot(m), b.Dot(b)
 	c := Vec{(a2*(m.Y-b.Y) + m2*(b.Y-a.Y) + b2*(a.Y-m.Y)) / d,
 		(a2*(b.X-m.X) + m2*(a.X-b.X) + b2*(m.X-a.X)) / d}

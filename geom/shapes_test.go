@@ -47,6 +47,10 @@ func TestArcThroughAndBounds(t *testing.T) {
 	b := s.Bounds()
 	approx(t, "top", b.Max.Y, 1, 1e-12)
 	approx(t, "bottom", b.Min.Y, 0, 1e-12)
+	// Rounding puts (35.3, 34.7) a hair off the line x + y = 70; it is still a line.
+	if l := ArcThrough(V(40, 30), V(35.3, 34.7), V(30, 40)); l.IsArc() {
+		t.Errorf("collinear points: got %v, want a line", l)
+	}
 	cw := ArcThrough(V(1, 0), V(0, -1), V(-1, 0))
 	approx(t, "clockwise sweep", cw.Sweep, -math.Pi, 1e-12)
 	approx(t, "clockwise bottom", cw.Bounds().Min.Y, -1, 1e-12)
