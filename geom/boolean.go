@@ -17,6 +17,12 @@ import (
 // and the rest are worked in groups of inputs whose boxes overlap, so a plate with thousands
 // of separate features costs little more than its largest cluster.
 
+// The inputs are expected to be valid regions (see Region.Validate) in any orientation; the
+// regions of one operand may overlap one another. Boundaries that coincide, wholly or in
+// part, are recognised as shared: regions meeting along an edge merge, and a region less
+// itself leaves nothing. A result whose boundary touches itself at a single point (a disc less
+// a smaller disc touching it inside) comes out as separate loops meeting there.
+
 // Union returns the regions covering every point of any input region, dissolved into
 // non-overlapping regions (outer counter-clockwise, holes clockwise).
 func Union(rs ...Region) []Region { return combine(opUnion, rs, nil) }
@@ -76,7 +82,7 @@ func combine(op boolOp, a, b []Region) []Region {
 	for _, group := range clusters(boxes) {
 		if len(group) == 1 {
 			if i := group[0]; op.lonely(operandOf(i, na)) {
-				out = append(out, in[i])
+				out = append(out, cloneRegion(in[i]))
 			}
 			continue
 		}
@@ -104,6 +110,16 @@ func normalized(rs []Region) []Region {
 		if len(r.Outer) > 0 {
 			out = append(out, r.Normalize())
 		}
+	}
+	return out
+}
+
+// cloneRegion returns a copy of r that shares no contour with it, so that callers may change
+// a result without changing an input.
+func cloneRegion(r Region) Region {
+	out := Region{Outer: append(Contour(nil), r.Outer...)}
+	for _, h := range r.Holes {
+		out.Holes = append(out.Holes, append(Contour(nil), h...))
 	}
 	return out
 }

@@ -199,6 +199,74 @@ func TestUnionMany(t *testing.T) {
 	approx(t, "area", boolArea(got), want, 1e-9)
 }
 
+func TestUnionTiles(t *testing.T) {
+	// An n × n board of unit squares: all of them merge into one square with four straight
+	// sides; the dark squares alone touch only at corners and stay apart.
+	const n = 12
+	var all, dark []Region
+	for i := 0; i < n; i++ {
+		for j := 0; j < n; j++ {
+			x, y := float64(i), float64(j)
+			sq := NewRegion(Polygon(V(x, y), V(x+1, y), V(x+1, y+1), V(x, y+1)))
+			all = append(all, sq)
+			if (i+j)%2 == 0 {
+				dark = append(dark, sq)
+			}
+		}
+	}
+	got := Union(all...)
+	checkBoolRegions(t, "board", got)
+	if len(got) != 1 || len(got[0].Outer) != 4 || len(got[0].Holes) != 0 {
+		t.Fatalf("board: got %d regions, want 1 square of 4 sides", len(got))
+	}
+	approx(t, "board area", got[0].Area(), n*n, 1e-9) // derived: n² unit squares
+	got = Union(dark...)
+	checkBoolRegions(t, "dark squares", got)
+	if len(got) != n*n/2 {
+		t.Errorf("dark squares: got %d regions, want %d", len(got), n*n/2)
+	}
+	// Derived: the light squares are what the board less the dark ones leaves.
+	light := Difference([]Region{NewRegion(Polygon(V(0, 0), V(n, 0), V(n, n), V(0, n)))}, dark)
+	checkBoolRegions(t, "light squares", light)
+	if len(light) != n*n/2 {
+		t.Errorf("light squares: got %d regions, want %d", len(light), n*n/2)
+	}
+	approx(t, "light area", boolArea(light), n*n/2, 1e-9)
+}
+
+func TestBooleanResultIsACopy(t *testing.T) {
+	sq := NewRegion(shape(t, "0,0 1,0 1,1 0,1"))
+	got := Union(sq)
+	got[0].Outer[0].A = V(5, 5)
+	if sq.Outer[0].A != V(0, 0) {
+		t.Errorf("changing the result changed the input: got %v, want (0, 0)", sq.Outer[0].A)
+	}
+}
+
+func ExampleUnion() {
+	// Two 10 × 10 plates overlapping by 5 × 10, and a disc standing apart.
+	a, _ := Rect(V(0, 0), V(10, 10), 0)
+	b, _ := Rect(V(5, 0), V(10, 10), 0)
+	disc := Circle(V(40, 5), 2)
+	for _, r := range Union(NewRegion(a), NewRegion(b), NewRegion(disc)) {
+		fmt.Printf("area %.4f, %d sides\n", r.Area(), len(r.Outer))
+	}
+	// Output:
+	// area 150.0000, 4 sides
+	// area 12.5664, 1 sides
+}
+
+func ExampleDifference() {
+	// A 20 × 10 plate less a bore of radius 3 leaves the plate with one round hole.
+	plate, _ := Rect(V(0, 0), V(20, 10), 0)
+	bore := NewRegion(Circle(V(10, 5), 3))
+	for _, r := range Difference([]Region{NewRegion(plate)}, []Region{bore}) {
+		fmt.Printf("area %.4f, %d hole\n", r.Area(), len(r.Holes))
+	}
+	// Output:
+	// area 171.7257, 1 hole
+}
+
 // randomPair returns two seeded random regions that overlap in various ways: shifted,
 // rotated, the same region twice, or one mirrored onto the other.
 func randomPair(rng *rand.Rand) (Region, Region, string) {
@@ -285,6 +353,15 @@ func checkMembership(t *testing.T, rng *rand.Rand, seed int64, kind string, a, b
 			if got := in2(c.rs, p); got != c.want {
 				t.Errorf("seed %d (%s): %s holds %v: got %v, want %v", seed, kind, c.name, p, got, c.want)
 			}
+		}
+		n := 0
+		for _, r := range u {
+			if r.Contains(p) {
+				n++
+			}
+		}
+		if n > 1 {
+			t.Errorf("seed %d (%s): %v lies in %d regions of the union, want at most 1", seed, kind, p, n)
 		}
 	}
 }
