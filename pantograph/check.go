@@ -108,21 +108,21 @@ func checkFeature(f Feature, s Stock) []Problem {
 	switch f.Kind {
 	case KindHoles:
 		if !(f.Diameter > 0) || math.IsInf(f.Diameter, 0) {
-			ps = append(ps, problemf(Error, f, "diameter must be greater than 0, got %s", num(f.Diameter)))
+			ps = append(ps, problemf(Error, f, "diameter must be greater than 0, got %s", num(f.Diameter)).on(f, "diameter"))
 		}
 		if len(f.Centers) == 0 {
-			ps = append(ps, problemf(Error, f, "no hole positions given"))
+			ps = append(ps, problemf(Error, f, "no hole positions given").on(f, "at"))
 		}
 	case KindSlot:
 		if !(f.Width > 0) || math.IsInf(f.Width, 0) {
-			ps = append(ps, problemf(Error, f, "width must be greater than 0, got %s", num(f.Width)))
+			ps = append(ps, problemf(Error, f, "width must be greater than 0, got %s", num(f.Width)).on(f, "width"))
 		}
 	case KindGroove:
 		if f.Width < 0 || math.IsNaN(f.Width) || math.IsInf(f.Width, 0) {
-			ps = append(ps, problemf(Error, f, "width must be 0 (as wide as the cutter) or more, got %s", num(f.Width)))
+			ps = append(ps, problemf(Error, f, "width must be 0 (as wide as the cutter) or more, got %s", num(f.Width)).on(f, "width"))
 		}
 		if len(f.Path) < 2 {
-			ps = append(ps, problemf(Error, f, "a groove needs at least 2 points, got %d", len(f.Path)))
+			ps = append(ps, problemf(Error, f, "a groove needs at least 2 points, got %d", len(f.Path)).on(f, "points"))
 		}
 	}
 	ps = append(ps, checkDepth(f, s)...)
@@ -142,19 +142,19 @@ func checkDepth(f Feature, s Stock) []Problem {
 		return []Problem{problemf(Error, f, `depth missing: give depth = "through" or a depth`)}
 	case d.Through:
 		if f.Kind == KindPocket {
-			return []Problem{problemf(Error, f, "a pocket cannot go through; make it a [[cutout]]")}
+			return []Problem{problemf(Error, f, "a pocket cannot go through; make it a [[cutout]]").on(f, "depth")}
 		}
 		return nil
 	case !(d.MM > 0) || math.IsInf(d.MM, 0):
-		return []Problem{problemf(Error, f, "depth must be greater than 0, got %s", num(d.MM))}
+		return []Problem{problemf(Error, f, "depth must be greater than 0, got %s", num(d.MM)).on(f, "depth")}
 	case s.Thickness <= 0:
 		return nil // reported with the stock
 	case d.MM > s.Thickness:
 		return []Problem{amountf(Error, f, d.MM-s.Thickness,
-			"depth %s is deeper than the stock (%s) by %s", num(d.MM), mm(s.Thickness), mm(d.MM-s.Thickness))}
+			"depth %s is deeper than the stock (%s) by %s", num(d.MM), mm(s.Thickness), mm(d.MM-s.Thickness)).on(f, "depth")}
 	case d.MM == s.Thickness:
 		return []Problem{problemf(Warning, f,
-			`depth %s is the whole stock thickness: it breaks through; write depth = "through" if that is meant`, mm(d.MM))}
+			`depth %s is the whole stock thickness: it breaks through; write depth = "through" if that is meant`, mm(d.MM)).on(f, "depth")}
 	}
 	return nil
 }

@@ -75,7 +75,21 @@ type Feature struct {
 	From, To geom.Vec
 
 	Depth Depth
-	Where Where // where the feature was written
+	Where Where // where the feature was written: its table header
+
+	// KeyLines holds the line of each key as written, when read from a file: "depth",
+	// "diameter", and for lists each entry, "at[2]" (counted from 0). Checks use it to point at
+	// the line that is wrong rather than the table's header. It may be nil.
+	KeyLines map[string]int
+}
+
+// WhereKey returns where key of the feature was written, or the feature's own place when the
+// key's line is not known.
+func (f Feature) WhereKey(key string) Where {
+	if l, ok := f.KeyLines[key]; ok && l > 0 {
+		return Where{File: f.Where.File, Line: l}
+	}
+	return f.Where
 }
 
 // Label names the feature in messages: its table and its name, as the file has them.

@@ -20,6 +20,12 @@ type element struct {
 	hole    bool     // a drilled hole: a circle of radius r about at
 	at      geom.Vec // hole centre, or start of a groove stretch
 	r       float64
+	key     string // the key its line is written on ("at[2]", "points[0]"), "" for the table
+}
+
+// problem builds a problem about the element, placed on its own line.
+func (e element) problem(sev Severity, amount float64, format string, args ...any) Problem {
+	return amountf(sev, e.f, amount, format, args...).on(e.f, e.key)
 }
 
 // name says which element is meant in a message about its own feature.
@@ -64,13 +70,15 @@ func outlinesOf(fs []Feature) []element {
 		switch f.Kind {
 		case KindHoles:
 			for i, c := range f.Centers {
-				es = append(es, element{f: f, outline: f.HoleContour(i), hole: true, at: c, r: f.Diameter / 2})
+				es = append(es, element{f: f, outline: f.HoleContour(i), hole: true, at: c, r: f.Diameter / 2,
+					key: fmt.Sprintf("at[%d]", i)})
 			}
 		case KindGroove:
 			r := math.Max(f.Width/2, grooveProbe)
 			for i := 0; i+1 < len(f.Path); i++ {
 				a, b := f.Path[i], f.Path[i+1]
-				es = append(es, element{f: f, outline: geom.Capsule(a, b, r), at: a, r: r})
+				es = append(es, element{f: f, outline: geom.Capsule(a, b, r), at: a, r: r,
+					key: fmt.Sprintf("points[%d]", i)})
 			}
 		default:
 			es = append(es, element{f: f, outline: f.Region.Outer})
@@ -88,15 +96,15 @@ func checkPlacement(profile Feature, es []element, o Options) []Problem {
 		rel, amount := relate(edge, e.outline)
 		switch rel {
 		case apart, aInsideB:
-			ps = append(ps, amountf(Error, e.f, amount, "%s lies outside the profile, %s from its edge",
+			ps = append(ps, e.problem(Error, amount, "%s lies outside the profile, %s from its edge",
 				e.name(), mm(amount)))
 		case crossing:
 			out := reach(e.outline, edge, false)
-			ps = append(ps, amountf(Error, e.f, out, "%s breaks through the profile edge: it reaches %s beyond it",
+			ps = append(ps, e.problem(Error, out, "%s breaks through the profile edge: it reaches %s beyond it",
 				e.name(), mm(out)))
 		case bInsideA:
 			if amount < o.MinWall && e.f.Kind != KindGroove {
-				ps = append(ps, amountf(Warning, e.f, amount, "%s leaves a wall of only %s to the profile edge (less than %s)",
+				ps = append(ps, e.problem(Warning, amount, "%s leaves a wall of only %s to the profile edge (less than %s)",
 					e.name(), mm(amount), mm(o.MinWall)))
 			}
 		}
@@ -151,13 +159,14 @@ func pairProblem(a, b element, o Options) (Problem, bool) {
 			outer, inner = b, a
 		}
 		if outer.f.Opening() {
-			return problemf(Warning, inner.f, "%s lies inside %s, where there is no metal left to cut",
-				inner.name(), outer.fullName()), true
+			p := problemf(Warning, inner.f, "%s lies inside %s, where there is no metal left to cut",
+				inner.name(), outer.fullName())
+			return p.on(inner.f, inner.key), true
 		}
 		return Problem{}, false // a hole or slot in a pocket floor, a step in a pocket: fine
 	}
 	if amount < o.MinWall && a.f.Kind != KindGroove && b.f.Kind != KindGroove {
-		return amountf(Warning, b.f, amount, "%s leaves a wall of only %s to %s (less than %s)",
+		return b.problem(Warning, amount, "%s leaves a wall of only %s to %s (less than %s)",
 			b.name(), mm(amount), a.fullName(), mm(o.MinWall)), true
 	}
 	return Problem{}, false
@@ -192,5 +201,5 @@ func crossProblem(a, b element, amount float64) Problem {
 	if b.f.Kind == KindGroove || a.f.Kind == KindGroove {
 		verb = "crosses " + a.fullName()
 	}
-	return amountf(sev, b.f, amount, "%s %s", b.name(), verb)
+	return b.problem(sev, amount, "%s %s", b.name(), verb)
 }

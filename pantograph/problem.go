@@ -51,6 +51,12 @@ func problemf(sev Severity, f Feature, format string, args ...any) Problem {
 		Where: f.Where}
 }
 
+// on moves the problem to the line of key in feature f.
+func (p Problem) on(f Feature, key string) Problem {
+	p.Where = f.WhereKey(key)
+	return p
+}
+
 // amountf builds a problem about feature f with an amount in mm.
 func amountf(sev Severity, f Feature, amount float64, format string, args ...any) Problem {
 	p := problemf(sev, f, format, args...)

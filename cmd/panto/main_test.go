@@ -43,7 +43,7 @@ func TestExitCodes(t *testing.T) {
 		{"check a bad file", []string{"check", "../../testdata/parts/bad/typo-key.toml"}, exitUsage,
 			"typo-key.toml:14: unknown key `diamter`"},
 		{"check a part with errors", []string{"check", "../../testdata/parts/bad/overlapping-holes.toml"}, exitUsage,
-			"overlapping-holes.toml:17: error:"},
+			"overlapping-holes.toml:21: error:"},
 		{"warnings keep exit 0", []string{"check", "--min-wall", "2", "../../samples/pump-port-plate.toml"}, exitOK,
 			"warning:"},
 	}
@@ -157,7 +157,7 @@ func TestCheckJSONProblems(t *testing.T) {
 	}
 	p := got.Problems[0]
 	// derived: the hole at x = 25 with radius 0.5 is 4.5 beyond the edge at x = 20
-	if p.Severity != "error" || p.Feature != `[[holes]] "pivots"` || p.Line != 11 || p.Amount == nil || *p.Amount != 4.5 {
+	if p.Severity != "error" || p.Feature != `[[holes]] "pivots"` || p.Line != 17 || p.Amount == nil || *p.Amount != 4.5 {
 		t.Errorf("got %+v", p)
 	}
 }

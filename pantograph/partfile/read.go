@@ -216,7 +216,23 @@ func (r *reader) readFeature(k pantograph.Kind, i int, m map[string]any) (pantog
 	if err := readDepth(t, &f); err != nil {
 		return f, err
 	}
+	f.KeyLines = t.keyLines()
 	return f, readShape(t, &f)
+}
+
+// keyLines returns the line of every key of t, and of every entry of its lists ("at[2]").
+func (t table) keyLines() map[string]int {
+	out := map[string]int{}
+	for k, v := range t.m {
+		l := t.at(k)
+		out[k] = t.r.lines.line(l.path)
+		if a, ok := v.([]any); ok {
+			for i := range a {
+				out[fmt.Sprintf("%s[%d]", k, i)] = t.r.lines.line(l.elem(i).path)
+			}
+		}
+	}
+	return out
 }
 
 // readDepth reads depth where the kind takes one; cut-outs are always through.

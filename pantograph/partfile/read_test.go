@@ -212,6 +212,15 @@ depth = 0.05
 	if h := p.Features[4]; h.Diameter != 0.4 || len(h.Centers) != 2 || h.Centers[1] != geom.V(19, 1) {
 		t.Errorf("holes: got %+v", h)
 	}
+	// Lines counted in the source above: the [[holes]] table starts on line 23.
+	for key, want := range map[string]int{"name": 24, "diameter": 25, "depth": 26, "at": 27, "at[1]": 27} {
+		if got := p.Features[4].WhereKey(key).Line; got != want {
+			t.Errorf("holes key %s: got line %d, want %d", key, got, want)
+		}
+	}
+	if got := p.Features[4].WhereKey("nosuch").Line; got != 23 {
+		t.Errorf("unknown key: got line %d, want the table's line 23", got)
+	}
 	if g := p.Features[5]; len(g.Path) != 2 || g.Width != 0 || g.Depth.MM != 0.05 {
 		t.Errorf("groove: got %+v", g)
 	}
