@@ -97,6 +97,11 @@ func TestBoolean(t *testing.T) {
 			[]Region{reg("0,0 5,0 5,10 0,10")}, 50, 1, 0, 1e-12},
 		{"union fills a hole", opUnion, []Region{reg("0,0 10,0 10,10 0,10", Circle(V(5, 5), 2))},
 			[]Region{NewRegion(Circle(V(5, 5), 2))}, 100, 1, 0, 1e-12},
+		// Derived: two discs of radius 1 touching at one point.
+		{"discs touching at a point stay two", opUnion, []Region{NewRegion(Circle(V(0, 0), 1))},
+			[]Region{NewRegion(Circle(V(2, 0), 1))}, 2 * math.Pi, 2, 0, 1e-12},
+		{"discs touching at a point share nothing", opIntersection,
+			[]Region{NewRegion(Circle(V(0, 0), 1))}, []Region{NewRegion(Circle(V(2, 0), 1))}, 0, 0, 0, 0},
 		{"region with itself, union", opUnion, []Region{sq}, []Region{sq}, 16, 1, 0, 1e-12},
 		{"region with itself, intersection", opIntersection, []Region{sq}, []Region{sq},
 			16, 1, 0, 1e-12},
@@ -265,6 +270,75 @@ func ExampleDifference() {
 	}
 	// Output:
 	// area 171.7257, 1 hole
+}
+
+// randomCut returns a seeded random convex polygon, possibly with rounded corners, and the
+// two pieces a straight cut between two of its corners makes of it.
+func randomCut(rng *rand.Rand) (whole, left, right Region) {
+	n := 5 + rng.Intn(12)
+	angles := make([]float64, n)
+	for k := range angles {
+		angles[k] = 2 * math.Pi * (float64(k) + 0.6*rng.Float64()) / float64(n)
+	}
+	rx, ry := 5+20*rng.Float64(), 5+20*rng.Float64()
+	pts := make([]Vec, n)
+	for k, a := range angles {
+		pts[k] = V(rx*math.Cos(a), ry*math.Sin(a))
+	}
+	i := rng.Intn(n)
+	j := (i + 2 + rng.Intn(n-3)) % n // at least one corner on each side of the cut
+	var l, r []Vec
+	for k := i; ; k = (k + 1) % n {
+		l = append(l, pts[k])
+		if k == j {
+			break
+		}
+	}
+	for k := j; ; k = (k + 1) % n {
+		r = append(r, pts[k])
+		if k == i {
+			break
+		}
+	}
+	return NewRegion(Polygon(pts...)), NewRegion(Polygon(l...)), NewRegion(Polygon(r...))
+}
+
+func TestBooleanCutAndRejoin(t *testing.T) {
+	// A convex polygon cut in two along a chord: the pieces share that chord exactly, run
+	// opposite ways along it, and must join back into the whole.
+	for seed := int64(1); seed <= 200; seed++ {
+		rng := rand.New(rand.NewSource(seed))
+		whole, left, right := randomCut(rng)
+		u := Union(left, right)
+		checkBoolRegions(t, fmt.Sprintf("seed %d: union", seed), u)
+		if len(u) != 1 || len(u[0].Outer) != len(whole.Outer) {
+			t.Errorf("seed %d: union: got %d regions, want 1 with %d sides", seed, len(u), len(whole.Outer))
+		}
+		// Derived: the pieces tile the whole, so areas add and the pieces share no area.
+		approx(t, fmt.Sprintf("seed %d: union area", seed), boolArea(u), whole.Area(), 1e-9*whole.Area())
+		if in := Intersection([]Region{left}, []Region{right}); len(in) != 0 {
+			t.Errorf("seed %d: intersection: got %d regions of area %g, want none", seed, len(in), boolArea(in))
+		}
+		d := Difference([]Region{whole}, []Region{left})
+		checkBoolRegions(t, fmt.Sprintf("seed %d: difference", seed), d)
+		approx(t, fmt.Sprintf("seed %d: whole less left", seed), boolArea(d), right.Area(), 1e-9*whole.Area())
+		in := Intersection([]Region{whole}, []Region{right})
+		approx(t, fmt.Sprintf("seed %d: whole and right", seed), boolArea(in), right.Area(), 1e-9*whole.Area())
+	}
+}
+
+func TestUnionHalfDiscs(t *testing.T) {
+	// Two half discs cut along a diameter join back into one round disc: the two half-circle
+	// arcs continue each other and come out as one full circle.
+	top := NewRegion(Contour{Arc(V(0, 0), 2, 0, math.Pi), Line(V(-2, 0), V(2, 0))})
+	bottom := NewRegion(Contour{Arc(V(0, 0), 2, math.Pi, math.Pi), Line(V(2, 0), V(-2, 0))})
+	got := Union(top, bottom)
+	checkBoolRegions(t, "union", got)
+	if len(got) != 1 || len(got[0].Outer) != 1 {
+		t.Fatalf("got %d regions, want one made of a single full circle", len(got))
+	}
+	approx(t, "area", got[0].Area(), 4*math.Pi, 1e-12) // derived: πr²
+	approx(t, "sweep", got[0].Outer[0].Sweep, 2*math.Pi, 1e-12)
 }
 
 // randomPair returns two seeded random regions that overlap in various ways: shifted,
