@@ -556,9 +556,6 @@ func TestBooleanNearlyCoincident(t *testing.T) {
 }
 
 func TestBooleanNearlyConcentricCircles(t *testing.T) {
-	t.Skip("circleCircle in intersect.go takes circles whose centres are just over pointTol " +
-		"apart for internally tangent and returns a point near the centre, far off both circles; " +
-		"re-enable when that is fixed")
 	// Two circles of one radius whose centres are 1e-9 apart, as met in a random test.
 	ca, cb := V(1.5928619264450405, -2.4859907952464253), V(1.592861926587402, -2.4859907942566104)
 	a := NewRegion(Contour{ArcFrom(V(3.6629067510590776, -2.4859907952464253), ca, 2*math.Pi)})

@@ -31,6 +31,9 @@ func intersect(s, t Segment) []crossing {
 	}
 	var out []crossing
 	for _, p := range pts {
+		if s.offCurve(p) > snapTol || t.offCurve(p) > snapTol {
+			continue
+		}
 		ta, oka := s.paramOf(p)
 		tb, okb := t.paramOf(p)
 		if !oka || !okb {
@@ -40,6 +43,14 @@ func intersect(s, t Segment) []crossing {
 		out = append(out, crossing{at: p, ta: ta, tb: tb})
 	}
 	return dedupCrossings(out)
+}
+
+// offCurve returns how far p lies from the line or circle that s runs on.
+func (s Segment) offCurve(p Vec) float64 {
+	if !s.IsArc() {
+		return math.Abs(s.B.Sub(s.A).Unit().Cross(p.Sub(s.A)))
+	}
+	return math.Abs(p.Dist(s.Center) - s.Radius())
 }
 
 // snapEnd returns the end point of s when parameter t is an end, else p.
@@ -107,22 +118,21 @@ func circleCircle(s, t Segment) []Vec {
 	r1, r2 := s.Radius(), t.Radius()
 	v := t.Center.Sub(s.Center)
 	d := v.Len()
-	if d <= pointTol {
-		if math.Abs(r1-r2) <= pointTol {
-			return []Vec{s.A, s.B, t.A, t.B}
-		}
-		return nil
+	if d <= snapTol && math.Abs(r1-r2) <= snapTol {
+		// One circle, as far as crossings can tell: the overlap's ends are the end points.
+		return []Vec{s.A, s.B, t.A, t.B}
 	}
-	if d > r1+r2+pointTol || d < math.Abs(r1-r2)-pointTol {
+	if d <= pointTol || d > r1+r2+pointTol || d < math.Abs(r1-r2)-pointTol {
 		return nil
 	}
 	u := v.Mul(1 / d)
 	a := (r1*r1 - r2*r2 + d*d) / (2 * d)
 	h2 := r1*r1 - a*a
-	base := s.Center.Add(u.Mul(a))
-	if h2 <= (pointTol*pointTol) || math.Abs(d-(r1+r2)) <= pointTol || math.Abs(d-math.Abs(r1-r2)) <= pointTol {
-		return []Vec{base}
+	if h2 <= 0 {
+		// Tangent, or missing by less than pointTol: the touching point on the first circle.
+		return []Vec{s.Center.Add(u.Mul(math.Copysign(r1, a)))}
 	}
+	base := s.Center.Add(u.Mul(a))
 	h := math.Sqrt(h2)
 	return []Vec{base.Add(u.Perp().Mul(h)), base.Sub(u.Perp().Mul(h))}
 }
