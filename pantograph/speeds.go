@@ -1,0 +1,145 @@
+package pantograph
+
+import (
+	"fmt"
+	"math"
+	"strings"
+)
+
+// This file works out spindle speeds: n = 1000·v_c / (π·d) rpm for a surface speed v_c in
+// m/min and a tool of d mm (the formula of any machining handbook). Surface speeds come from
+// shop speed tables for HSS ("Machine Tool Speeds and Feeds" handouts); carbide runs at about
+// twice HSS (tool makers' general catalogues). Where a table gives a range the low end is used:
+// small tools on a light machine break before they wear. A speed above the spindle's top speed
+// is capped with a note; micro tools nearly always are.
+
+// SpeedSource names where the surface speeds come from, for the sheet.
+const SpeedSource = "n = 1000·v_c/(π·d); v_c for HSS from shop speed tables (low end of each " +
+	"range), carbide about 2× HSS (tool makers' general catalogues)"
+
+// carbideFactor is how much faster carbide cuts than HSS: "roughly 2×" (tool makers' general
+// catalogues, REFERENCES.md).
+const carbideFactor = 2
+
+// Material groups the surface-speed tables know.
+const (
+	groupAluminium = "aluminium"
+	groupBrass     = "brass and bronze"
+	groupMild      = "mild steel"
+	groupTool      = "tool steel"
+)
+
+// hssSpeed holds HSS surface speeds in m/min, drilling and milling, by material group. Drilling
+// from shop speed tables (aluminium ~76, brass/bronze ~61, mild steel ~34, tool steel ~18);
+// milling the low end of their ranges (76–150, 45–135, 21–37, 12–21).
+var hssSpeed = map[string]struct{ drill, mill float64 }{
+	groupAluminium: {76, 76},
+	groupBrass:     {61, 45},
+	groupMild:      {34, 21},
+	groupTool:      {18, 12},
+}
+
+// materialWords maps words in a stock's free-text material to a group; the first match wins,
+// so "tool steel" is tried before "steel".
+var materialWords = []struct{ word, group string }{
+	{"alumin", groupAluminium}, {"dural", groupAluminium},
+	{"brass", groupBrass}, {"bronze", groupBrass}, {"copper", groupBrass}, {"nickel silver", groupBrass},
+	{"tool steel", groupTool}, {"silver steel", groupTool}, {"gauge plate", groupTool},
+	{"stainless", groupTool}, {"drill rod", groupTool},
+	{"mild steel", groupMild}, {"steel", groupMild}, {"iron", groupMild},
+}
+
+// MaterialGroup returns the speed-table group for a stock material and whether it was
+// recognised. An unknown material is treated as tool steel, the slowest in the table, so that
+// a guess never runs a tool too fast.
+func MaterialGroup(material string) (string, bool) {
+	m := strings.ToLower(material)
+	for _, w := range materialWords {
+		if strings.Contains(m, w.word) {
+			return w.group, true
+		}
+	}
+	return groupTool, false
+}
+
+// SurfaceSpeed returns v_c in m/min for drilling (drill true) or milling a stock material
+// with a tool of toolMaterial ("hss" or "carbide"; anything else counts as HSS).
+func SurfaceSpeed(material, toolMaterial string, drill bool) float64 {
+	g, _ := MaterialGroup(material)
+	v := hssSpeed[g].mill
+	if drill {
+		v = hssSpeed[g].drill
+	}
+	if strings.EqualFold(toolMaterial, "carbide") {
+		v *= carbideFactor
+	}
+	return v
+}
+
+// RPM returns n = 1000·v_c / (π·d) for v_c in m/min and a tool of d mm.
+func RPM(vc, d float64) float64 { return 1000 * vc / (math.Pi * d) }
+
+// Speed is the spindle speed for one tool, with what limited it.
+type Speed struct {
+	SurfaceSpeed float64 // v_c, m/min
+	Wanted       float64 // rpm the formula gives
+	RPM          float64 // rpm to run at: Wanted, capped at the spindle's top speed
+	Capped       bool
+	Note         string // why RPM differs from Wanted, or that the material was guessed
+}
+
+// SpeedFor returns the spindle speed for a tool of diameter d mm and toolMaterial cutting
+// material on spindle s (drill true for drilling).
+func SpeedFor(s Spindle, material, toolMaterial string, d float64, drill bool) Speed {
+	vc := SurfaceSpeed(material, toolMaterial, drill)
+	sp := Speed{SurfaceSpeed: vc, Wanted: RPM(vc, d)}
+	sp.RPM = sp.Wanted
+	var notes []string
+	if _, ok := MaterialGroup(material); !ok {
+		notes = append(notes, fmt.Sprintf("material %q not in the speed table: tool steel speeds used", material))
+	}
+	switch {
+	case s.MaxRPM > 0 && sp.Wanted > s.MaxRPM:
+		sp.RPM, sp.Capped = s.MaxRPM, true
+		notes = append(notes, fmt.Sprintf("wants %.0f rpm, capped at the spindle's top speed %.0f: feed gently", sp.Wanted, s.MaxRPM))
+	case s.MinRPM > 0 && sp.Wanted < s.MinRPM:
+		sp.RPM = s.MinRPM
+		notes = append(notes, fmt.Sprintf("wants %.0f rpm, below the spindle's lowest %.0f: run at %.0f and cut lightly", sp.Wanted, s.MinRPM, s.MinRPM))
+	}
+	sp.Note = strings.Join(notes, "; ")
+	return sp
+}
+
+// microTool is the diameter, in mm, below which a tool counts as micro and gets a feed guide:
+// the published chip-load charts stop at Ø1.5 and give "below 1 mm ≈ 0.5–1 % of D"
+// (REFERENCES.md, below 1 mm from memory).
+const microTool = 1.0
+
+// microChipShare is the chip load per tooth of a micro end mill as a share of its diameter: the
+// low end of 0.5–1 % of D (chip-load charts; below 1 mm from memory).
+const microChipShare = 0.005
+
+// microDrillFeed is the feed per revolution of a micro drill, mm: about 1 µm/rev below 1 mm (a
+// micro-drill maker as quoted on a forum; memory-grade).
+const microDrillFeed = 0.001
+
+// defaultFlutes is assumed when a cutter's flutes are not stated: small end mills are mostly
+// two-fluted (common practice, no source).
+const defaultFlutes = 2
+
+// FeedGuide returns a feed in mm/min for a micro tool of diameter d mm at rpm, with the rule
+// it came from, or ok false for a tool that is not micro. flutes 0 means two.
+func FeedGuide(d, rpm float64, flutes int, drill bool) (feed float64, rule string, ok bool) {
+	if d >= microTool {
+		return 0, "", false
+	}
+	if drill {
+		return microDrillFeed * rpm, "about 1 µm per rev for drills below 1 mm (from memory)", true
+	}
+	if flutes <= 0 {
+		flutes = defaultFlutes
+	}
+	chip := microChipShare * d
+	return chip * float64(flutes) * rpm,
+		fmt.Sprintf("%.4f mm per tooth × %d flutes: 0.5 %% of D (low end of 0.5–1 %%, from memory)", chip, flutes), true
+}

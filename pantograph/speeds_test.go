@@ -1,0 +1,89 @@
+package pantograph
+
+import (
+	"math"
+	"testing"
+)
+
+func TestRPM(t *testing.T) {
+	tests := []struct {
+		name  string
+		vc, d float64
+		want  float64
+	}{
+		{"30 m/min at 0.5 mm", 30, 0.5, 19099}, // derived: 30000/(π·0.5) = 19098.6
+		{"76 m/min at 3 mm", 76, 3, 8064},      // derived: 76000/(π·3) = 8063.8
+		// derived from the inch form n ≈ 3.82·SFM/D: 100 SFM = 30.48 m/min, 0.25 in = 6.35 mm
+		// gives 1528 rpm.
+		{"inch form", 30.48, 6.35, 1528},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			if got := RPM(tc.vc, tc.d); math.Abs(got-tc.want) > 0.5 {
+				t.Errorf("got %v, want %v", got, tc.want)
+			}
+		})
+	}
+}
+
+func TestSpeedForCap(t *testing.T) {
+	// 30 m/min is not a table value, so build the case from a table one: brass milling HSS is
+	// 45 m/min (low end of 45–135, shop speed tables); at 0.5 mm that is 28 648 rpm (derived).
+	tests := []struct {
+		name    string
+		s       Spindle
+		want    float64
+		capped  bool
+		hasNote bool
+	}{
+		{"no limit", Spindle{}, 28648, false, false},
+		{"capped at 15000", Spindle{MaxRPM: 15000}, 15000, true, true},
+		{"under the top", Spindle{MaxRPM: 30000}, 28648, false, false},
+		{"below the lowest", Spindle{MinRPM: 40000}, 40000, false, true},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			sp := SpeedFor(tc.s, "brass", "hss", 0.5, false)
+			if math.Abs(sp.RPM-tc.want) > 0.5 || sp.Capped != tc.capped || (sp.Note != "") != tc.hasNote {
+				t.Errorf("got %.1f capped %v note %q, want %v capped %v note %v", sp.RPM, sp.Capped, sp.Note, tc.want, tc.capped, tc.hasNote)
+			}
+		})
+	}
+}
+
+func TestSurfaceSpeed(t *testing.T) {
+	tests := []struct {
+		material, tool string
+		drill          bool
+		want           float64
+	}{
+		{"clock brass", "hss", true, 61},      // shop speed tables: brass drilling ~61
+		{"Brass", "carbide", false, 90},       // 45 × 2: carbide about 2× HSS
+		{"6082 aluminium", "hss", true, 76},   // aluminium drilling ~76
+		{"silver steel", "hss", false, 12},    // tool steel milling 12–21, low end
+		{"mild steel", "hss", true, 34},       // mild steel drilling ~34
+		{"boxwood", "hss", true, 18},          // unknown: slowest row (tool steel drilling ~18)
+		{"stainless steel", "hss", false, 12}, // counted as tool steel: before "steel"
+	}
+	for _, tc := range tests {
+		t.Run(tc.material, func(t *testing.T) {
+			if got := SurfaceSpeed(tc.material, tc.tool, tc.drill); got != tc.want {
+				t.Errorf("got %v, want %v", got, tc.want)
+			}
+		})
+	}
+}
+
+func TestFeedGuide(t *testing.T) {
+	// derived: 0.005 × 0.5 mm = 2.5 µm/tooth × 2 flutes × 15000 rpm = 75 mm/min.
+	if f, _, ok := FeedGuide(0.5, 15000, 0, false); !ok || math.Abs(f-75) > 1e-9 {
+		t.Errorf("end mill: got %v %v, want 75 true", f, ok)
+	}
+	// derived: 1 µm/rev × 15000 rpm = 15 mm/min.
+	if f, _, ok := FeedGuide(0.6, 15000, 0, true); !ok || math.Abs(f-15) > 1e-9 {
+		t.Errorf("drill: got %v %v, want 15 true", f, ok)
+	}
+	if _, _, ok := FeedGuide(2, 5000, 2, false); ok {
+		t.Errorf("a 2 mm cutter got a micro feed guide")
+	}
+}
