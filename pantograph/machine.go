@@ -1,11 +1,18 @@
 package pantograph
 
+import (
+	"fmt"
+	"math"
+	"strings"
+)
+
 // Machine is a pantograph mill with the tools and the printer that go with it, as a machine
 // file describes it. Every length is in millimetres (readers convert); dial pitches stay in
 // their own screw's units because that is what the dial reads.
 type Machine struct {
 	Name   string
 	Source string // where the machine came from (a file name), for messages
+	Units  Units  // the units the machine file was written in; lengths here are already mm
 
 	Ratio     RatioRange // the reductions the linkage can be set to
 	CopyTable Travel     // how far the copy table moves, in template mm
@@ -21,9 +28,59 @@ type Machine struct {
 
 // RatioRange is the set of ratios R (template size : part size) a linkage can be set to: any
 // value from Min to Max, or, when Settings is not empty, only those fixed settings.
+//
+// The zero RatioRange means the range was not stated. Settings, when given, are in ascending
+// order and Min and Max are the first and last of them.
 type RatioRange struct {
 	Min, Max float64
 	Settings []float64
+}
+
+// ratioTol is how near, relatively, a ratio must be to a fixed setting or a range end to count
+// as on it: it absorbs the rounding of a ratio worked out from other numbers (25.4 / 2.54), and
+// is far finer than any linkage can be set (derived: 1e-9 of 10:1 moves a 100 mm template by
+// a ten-millionth of a millimetre at the part).
+const ratioTol = 1e-9
+
+// Stated reports whether the range says anything: a continuous range or fixed settings.
+func (r RatioRange) Stated() bool { return len(r.Settings) > 0 || r.Max > 0 }
+
+// Allows reports whether the linkage can be set to ratio: one of the fixed settings, or a
+// value from Min to Max. A range that was not stated allows every ratio greater than 0, so
+// that a machine file without a ratio never rejects a plan on its own.
+func (r RatioRange) Allows(ratio float64) bool {
+	if !(ratio > 0) {
+		return false
+	}
+	tol := ratioTol * ratio
+	if len(r.Settings) > 0 {
+		for _, s := range r.Settings {
+			if math.Abs(s-ratio) <= tol {
+				return true
+			}
+		}
+		return false
+	}
+	if !r.Stated() {
+		return true
+	}
+	return ratio >= r.Min-tol && ratio <= r.Max+tol
+}
+
+// String describes the range for messages: "2:1 to 10:1, any value between",
+// "fixed settings 2:1, 5:1, 10:1" or "not stated".
+func (r RatioRange) String() string {
+	switch {
+	case len(r.Settings) > 0:
+		parts := make([]string, len(r.Settings))
+		for i, s := range r.Settings {
+			parts[i] = fmt.Sprintf("%g:1", s)
+		}
+		return "fixed settings " + strings.Join(parts, ", ")
+	case r.Stated():
+		return fmt.Sprintf("%g:1 to %g:1, any value between", r.Min, r.Max)
+	}
+	return "not stated"
 }
 
 // Travel is how far a table moves along X and Y, in mm; 0 means not stated.
