@@ -9,6 +9,7 @@ const usage = `panto prepares parts for a manual pantograph mill.
 
 Usage:
   panto check PART [--json] [--min-wall MM]   check a part file and say what limits the cutter
+  panto plan PART --ratio R --cutter D [...]  plan the template: sizes, compensation, order of work
   panto help [COMMAND]                        show this help, or a command's help
   panto --version                             show panto's version
 
@@ -60,6 +61,8 @@ func runHelp(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stdout, usage)
 	case args[0] == "check":
 		fmt.Fprintf(stdout, checkUsage, defaultMinWall)
+	case args[0] == "plan":
+		fmt.Fprint(stdout, planUsage)
 	default:
 		fmt.Fprintf(stderr, "panto: no help for %q: there is no such command\n", args[0])
 		return exitUsage

@@ -1,0 +1,402 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"sort"
+	"strconv"
+	"strings"
+
+	"github.com/spf13/pflag"
+
+	"panto/export/planjson"
+	"panto/geom"
+	"panto/pantograph"
+	"panto/pantograph/partfile"
+)
+
+// planFlags are the options of `panto plan`.
+type planFlags struct {
+	ratio, cutter, stylus, rotate float64
+	cutterFor                     map[string]string
+	tip, machine                  string
+	mirror, acceptLoss, millHoles bool
+	asJSON, help                  bool
+}
+
+// runPlan is `panto plan PART --ratio R --cutter D [...]`.
+func runPlan(args []string, stdout, stderr io.Writer) int {
+	var o planFlags
+	fl := pflag.NewFlagSet("plan", pflag.ContinueOnError)
+	fl.SetOutput(io.Discard)
+	fl.Float64Var(&o.ratio, "ratio", 0, "template size : part size")
+	fl.Float64Var(&o.cutter, "cutter", 0, "cutter diameter, mm")
+	fl.StringToStringVar(&o.cutterFor, "cutter-for", nil, "cutter for one kind of feature, KIND=MM")
+	fl.Float64Var(&o.stylus, "stylus", 0, "stylus diameter, mm")
+	fl.StringVar(&o.tip, "tip", "", "stylus tip: round or pointed")
+	fl.StringVar(&o.machine, "machine", "", "machine file")
+	fl.BoolVar(&o.mirror, "mirror", false, "mirror the template")
+	fl.Float64Var(&o.rotate, "rotate", 0, "turn the template, degrees counter-clockwise")
+	fl.BoolVar(&o.acceptLoss, "accept-loss", false, "plan even if some features are lost")
+	fl.BoolVar(&o.millHoles, "mill-holes", false, "mill holes larger than the cutter")
+	fl.BoolVar(&o.asJSON, "json", false, "print the plan as JSON")
+	fl.BoolVarP(&o.help, "help", "h", false, "show help")
+	if err := fl.Parse(args); err != nil {
+		fmt.Fprintf(stderr, "panto plan: %v\nRun 'panto help plan' for usage.\n", err)
+		return exitUsage
+	}
+	if o.help {
+		return runHelp([]string{"plan"}, stdout, stderr)
+	}
+	if fl.NArg() != 1 {
+		fmt.Fprintf(stderr, "panto plan: give exactly one part file, got %d\nUsage: %s\n", fl.NArg(), planSynopsis)
+		return exitUsage
+	}
+	setup, err := o.setup(fl)
+	if err != nil {
+		fmt.Fprintf(stderr, "panto plan: %v\n", err)
+		return exitUsage
+	}
+	return plan(fl.Arg(0), setup, o, stdout, stderr)
+}
+
+// plan reads the files, plans, prints and picks the exit code.
+func plan(path string, setup pantograph.Setup, o planFlags, stdout, stderr io.Writer) int {
+	part, err := partfile.ReadFile(path)
+	if err != nil {
+		return reportReadError(err, stderr)
+	}
+	var m *pantograph.Machine
+	if o.machine != "" {
+		mm, err := partfile.ReadMachineFile(o.machine)
+		if err != nil {
+			fmt.Fprintf(stderr, "panto plan: %v\n", err)
+			return exitUsage
+		}
+		m = &mm
+	}
+	p, err := pantograph.PlanPart(part, setup, m)
+	var pe pantograph.PartErrors
+	switch {
+	case errors.As(err, &pe):
+		for _, pr := range pe {
+			fmt.Fprintln(stderr, pr.Error())
+		}
+		fmt.Fprintf(stderr, "panto plan: %s has errors; fix them first (panto check shows them all)\n", path)
+		return exitUsage
+	case err != nil:
+		fmt.Fprintf(stderr, "panto plan: %v\n", err)
+		return exitUsage
+	}
+	if o.asJSON {
+		if err := planjson.Encode(stdout, p); err != nil {
+			fmt.Fprintf(stderr, "panto plan: %v\n", err)
+			return exitFailed
+		}
+	} else {
+		writePlan(stdout, p)
+	}
+	for _, w := range p.Warnings {
+		fmt.Fprintf(stderr, "warning: %s\n", w)
+	}
+	return planExit(p, stderr)
+}
+
+// planExit says why a plan cannot be carried out, and returns the exit code.
+func planExit(p pantograph.Plan, stderr io.Writer) int {
+	if p.Done() {
+		return exitOK
+	}
+	for _, w := range p.Warnings {
+		if w.Stops {
+			fmt.Fprintf(stderr, "panto plan: the job cannot be done as planned: %s\n", w)
+		}
+	}
+	if lost := p.Lost(); len(lost) > 0 && !p.Setup.AcceptLoss {
+		fmt.Fprintf(stderr, "panto plan: the cutter cannot make %s; use a smaller cutter, or pass --accept-loss to plan without %s\n",
+			quoteList(lost), them(len(lost)))
+	}
+	return exitFailed
+}
+
+// setup turns the flags into a Setup; Validate is left to the planner.
+func (o planFlags) setup(fl *pflag.FlagSet) (pantograph.Setup, error) {
+	for _, name := range []string{"ratio", "cutter"} {
+		if !fl.Changed(name) {
+			return pantograph.Setup{}, fmt.Errorf("--%s is required\nUsage: %s", name, planSynopsis)
+		}
+	}
+	s := pantograph.Setup{Ratio: o.ratio, Cutter: o.cutter, Stylus: o.stylus,
+		Tip: pantograph.Tip(o.tip), Mirror: o.mirror, Rotate: geom.Degrees(o.rotate),
+		AcceptLoss: o.acceptLoss, MillHoles: o.millHoles}
+	if fl.Changed("stylus") && !(o.stylus > 0) {
+		return s, fmt.Errorf("--stylus must be greater than 0 mm, got %g", o.stylus)
+	}
+	kinds := map[string]pantograph.Kind{}
+	for _, k := range []pantograph.Kind{pantograph.KindCutout, pantograph.KindPocket,
+		pantograph.KindHoles, pantograph.KindSlot, pantograph.KindGroove, pantograph.KindProfile} {
+		kinds[string(k)] = k
+	}
+	for name, v := range o.cutterFor {
+		k, ok := kinds[name]
+		if !ok {
+			return s, fmt.Errorf("--cutter-for: no kind of feature %q; use profile, cutout, pocket, slot, holes or groove", name)
+		}
+		d, err := strconv.ParseFloat(v, 64)
+		if err != nil {
+			return s, fmt.Errorf("--cutter-for %s: %q is not a diameter in mm", name, v)
+		}
+		if s.Cutters == nil {
+			s.Cutters = map[pantograph.Kind]float64{}
+		}
+		s.Cutters[k] = d
+	}
+	return s, nil
+}
+
+// quoteList formats names as "a", "b" and "c".
+func quoteList(names []string) string {
+	q := make([]string, len(names))
+	for i, n := range names {
+		q[i] = strconv.Quote(n)
+	}
+	if len(q) == 1 {
+		return q[0]
+	}
+	return strings.Join(q[:len(q)-1], ", ") + " and " + q[len(q)-1]
+}
+
+// them is "it" or "them".
+func them(n int) string {
+	if n == 1 {
+		return "it"
+	}
+	return "them"
+}
+
+// writePlan prints the plan in a machinist's words.
+func writePlan(w io.Writer, p pantograph.Plan) {
+	fmt.Fprintf(w, "plan for %s  (%s)\n", p.Part, p.Source)
+	fmt.Fprintf(w, "  ratio       %s:1, the template %s times the part%s\n", num(p.Ratio), num(p.Ratio), layout(p))
+	size := p.Bounds.Size()
+	fmt.Fprintf(w, "  template    %s x %s mm, from %s to %s on the copy table\n",
+		num(size.X), num(size.Y), at(p.Bounds.Min), at(p.Bounds.Max))
+	fmt.Fprintf(w, "  datum       the template's origin is the datum seat, at %s on the part\n", at(p.Datum))
+	if p.Stock.Material != "" {
+		fmt.Fprintf(w, "  stock       %s, %s mm thick\n", p.Stock.Material, num(p.Stock.Thickness))
+	}
+	fmt.Fprintf(w, "\nfeatures (template sizes in mm on the copy table)\n")
+	for _, i := range byNumber(p.Features) {
+		writeFeature(w, p.Features[i])
+	}
+	fmt.Fprintf(w, "\norder of work\n")
+	for i, st := range p.Steps {
+		fmt.Fprintf(w, "  %2d. %s\n", i+1, stepText(p, st))
+	}
+	fmt.Fprintf(w, "\nwarnings\n")
+	if len(p.Warnings) == 0 {
+		fmt.Fprintf(w, "  none: every feature comes out as drawn\n")
+	}
+	for _, wr := range p.Warnings {
+		fmt.Fprintf(w, "  %s%s\n", wr, amountText(wr))
+	}
+}
+
+// layout says how the template is laid on the copy table, when not plainly.
+func layout(p pantograph.Plan) string {
+	var s string
+	if p.Mirror {
+		s += ", mirrored left for right"
+	}
+	if d := p.Rotate.Degrees(); d != 0 {
+		s += fmt.Sprintf(", turned %s° anticlockwise", num(d))
+	}
+	return s
+}
+
+// writeFeature prints one feature: number, label, tools, what the template carries, status.
+func writeFeature(w io.Writer, f pantograph.PlannedFeature) {
+	no := "  -"
+	if f.Number > 0 {
+		no = fmt.Sprintf("%3d", f.Number)
+	}
+	fmt.Fprintf(w, "%s  %s\n", no, f.Label)
+	switch f.Method {
+	case pantograph.Drilled:
+		fmt.Fprintf(w, "       drill Ø%s, %s; %s stylus Ø%s in %d seat%s\n", num(f.Drill), f.Depth,
+			f.Tip, num(f.Stylus), len(f.Seats), suffix(len(f.Seats)))
+	case pantograph.Engraved:
+		fmt.Fprintf(w, "       cutter Ø%s, %s deep; %s stylus Ø%s along a channel Ø%s wide\n",
+			num(f.Cutter), f.Depth, f.Tip, num(f.Stylus), num(f.Width))
+	default:
+		fmt.Fprintf(w, "       cutter Ø%s, %s; %s stylus Ø%s; %s\n", num(f.Cutter), depthText(f),
+			f.Tip, num(f.Stylus), compensationText(f))
+		if f.Status != pantograph.StatusLost {
+			b := f.TemplateBounds.Size()
+			fmt.Fprintf(w, "       template %s x %s mm, area %s mm²\n", num(b.X), num(b.Y), num(f.TemplateArea))
+		}
+	}
+	switch f.Status {
+	case pantograph.StatusDeviates:
+		fmt.Fprintf(w, "       comes out not quite as drawn: see the warnings\n")
+	case pantograph.StatusLost:
+		fmt.Fprintf(w, "       LOST: the cutter cannot make it; it is left out of the order of work\n")
+	}
+}
+
+// depthText is "through" or the depth of a traced feature.
+func depthText(f pantograph.PlannedFeature) string {
+	if f.Kind == pantograph.KindProfile || f.Kind == pantograph.KindCutout {
+		return "through"
+	}
+	if f.Depth.Through {
+		return "through"
+	}
+	return num(f.Depth.MM) + " mm deep"
+}
+
+// compensationText says which way the template's edge moves and by how much.
+func compensationText(f pantograph.PlannedFeature) string {
+	d := f.Compensation
+	if num(d) == "0" {
+		return "stylus matches the cutter: template edge at exactly R × the part"
+	}
+	outline := f.Kind == pantograph.KindProfile
+	grows := d > 0 == outline
+	edge := "opening"
+	if outline {
+		edge = "outline"
+	}
+	verb := "shrunk"
+	if grows {
+		verb = "grown"
+	}
+	size := "smaller"
+	if d < 0 {
+		size = "larger"
+	}
+	return fmt.Sprintf("stylus %s than matched, so the template %s is %s by %s mm all round",
+		size, edge, verb, num(abs(d)))
+}
+
+// stepText says what one step of the order of work is.
+func stepText(p pantograph.Plan, st pantograph.Step) string {
+	if st.Feature < 0 {
+		return "set the stylus in the datum seat and zero the dials"
+	}
+	f := p.Features[st.Feature]
+	switch st.What {
+	case pantograph.StepDrill:
+		var seats []string
+		for _, s := range st.Seats {
+			seats = append(seats, at(s))
+		}
+		return fmt.Sprintf("drill      %s with the Ø%s drill: seat%s %s", f.Label, num(st.Drill), suffix(len(seats)), strings.Join(seats, ", "))
+	case pantograph.StepEngrave:
+		return fmt.Sprintf("engrave    %s (cutter Ø%s)", f.Label, num(f.Cutter))
+	}
+	verb := "mill      "
+	if f.Kind == pantograph.KindProfile {
+		verb = "cut out   "
+	}
+	return fmt.Sprintf("%s %s (cutter Ø%s, %s)", verb, f.Label, num(f.Cutter), depthText(f))
+}
+
+// amountText is a warning's amount at the part, when it has one.
+func amountText(w pantograph.PlanWarning) string {
+	if !w.HasAmount {
+		return ""
+	}
+	return fmt.Sprintf("  [%s mm at the part]", num(w.Amount))
+}
+
+// suffix is the plural ending for n things.
+func suffix(n int) string {
+	if n == 1 {
+		return ""
+	}
+	return "s"
+}
+
+func abs(v float64) float64 {
+	if v < 0 {
+		return -v
+	}
+	return v
+}
+
+// at formats a point to three decimals.
+func at(v geom.Vec) string { return point(v.X, v.Y) }
+
+const planSynopsis = `panto plan PART --ratio R --cutter D [--stylus D] [--machine FILE] [--mirror] [--rotate DEG] [--accept-loss] [--mill-holes] [--json]`
+
+const planUsage = `Usage: ` + planSynopsis + `
+
+Plans the template for the part file PART: the ratio, each feature with its cutter and stylus,
+how far the template's edges are moved for a stylus that does not match the cutter, the
+template's overall size on the copy table, the order of work, and every warning about what
+will not come out as drawn.
+
+The template is R times the part, its origin at the part's datum. With a stylus of exactly
+R × the cutter it is R times the part and no more. With another stylus every traced edge moves
+by δ = R × cutter radius − stylus radius: the outline grows by δ and openings shrink by δ (the
+other way when δ is negative), so the cutter still cuts the part as drawn. Drilled holes are
+seats for the stylus at R × their centre; grooves are channels as wide as the stylus.
+
+Order of work: zero the dials in the datum seat; drill the holes, smallest drill first, on a
+short route; pockets, blind slots and grooves; through slots and cut-outs; the profile last,
+so the part stays held until the end.
+
+Exit codes: 0 planned (warnings go to standard error too); 1 a feature is lost (the cutter
+cannot make it at all) and --accept-loss was not given, or the machine cannot do the job (the
+ratio cannot be set, the template is larger than the copy table's travel); 2 bad usage, or a
+bad part or machine file.
+
+Flags:
+  --ratio R            template size : part size, 1 or more (required)
+  --cutter D           cutter diameter in mm, for every milled and engraved feature (required)
+  --cutter-for KIND=D  another cutter for one kind: profile, cutout, pocket, slot, holes
+                       (milled holes) or groove; repeat or separate with commas
+  --stylus D           stylus diameter in mm for the whole job; without it, R × the cutter,
+                       or the stylus in the machine file nearest to that
+  --tip round|pointed  the stylus's tip (default round; a pointed tip traces with its point)
+  --machine FILE       machine file: ratio range, copy-table travel, styli, cutters and drills
+                       at hand, printer bed. Holes with no drill at hand are milled when they
+                       are larger than the cutter
+  --mirror             mirror the template left for right about the datum
+  --rotate DEG         turn the template DEG degrees anticlockwise about the datum (after
+                       any mirror); 180 suits a linkage pivoted between stylus and cutter
+  --accept-loss        plan even when the cutter cannot make some feature; it is left out
+  --mill-holes         mill every hole larger than its cutter instead of drilling it
+  --json               print the plan as one JSON object instead:
+                         part, file, ratio, mirror, rotate (degrees), datum [x, y] (part mm)
+                         template {bounds {min, max}}             template mm
+                         features [{name, kind, number, method, cutter, drill, stylus, tip,
+                                    compensation (δ, template mm), status (ok, deviates,
+                                    lost), depth, template_area (mm², traced features),
+                                    template_bounds, seats [[x, y]] (drilled holes),
+                                    path, width (grooves)}]
+                         order [feature names in working order]
+                         steps [{what, feature, drill, seats}]
+                         warnings [{feature, message, amount (mm at the part, or null),
+                                    stops}]
+                         done    whether the plan can be carried out
+  -h, --help           show this help
+`
+
+// byNumber returns the indices of fs in working order, features left out of it last.
+func byNumber(fs []pantograph.PlannedFeature) []int {
+	idx := make([]int, len(fs))
+	for i := range idx {
+		idx[i] = i
+	}
+	key := func(i int) int {
+		if fs[i].Number == 0 {
+			return len(fs) + 1
+		}
+		return fs[i].Number
+	}
+	sort.SliceStable(idx, func(a, b int) bool { return key(idx[a]) < key(idx[b]) })
+	return idx
+}

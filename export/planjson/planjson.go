@@ -1,0 +1,162 @@
+// Package planjson writes a template plan as JSON for scripts. The object is a view of
+// pantograph.Plan and computes nothing: every number is the plan's own, rounded to a nanometre
+// so float noise does not show.
+//
+// Lengths in the template frame (template bounds, feature bounds, seats, paths, compensation)
+// are template mm; datum and warning amounts are part mm; areas are template mm².
+package planjson
+
+import (
+	"encoding/json"
+	"fmt"
+	"io"
+	"math"
+
+	"panto/geom"
+	"panto/pantograph"
+)
+
+type planJSON struct {
+	Part     string        `json:"part"`
+	File     string        `json:"file"`
+	Ratio    float64       `json:"ratio"`
+	Mirror   bool          `json:"mirror"`
+	Rotate   float64       `json:"rotate"` // degrees, counter-clockwise
+	Datum    [2]float64    `json:"datum"`
+	Template templateJSON  `json:"template"`
+	Features []featureJSON `json:"features"`
+	Order    []string      `json:"order"`
+	Steps    []stepJSON    `json:"steps"`
+	Warnings []warningJSON `json:"warnings"`
+	Done     bool          `json:"done"`
+}
+
+type templateJSON struct {
+	Bounds boundsJSON `json:"bounds"`
+}
+
+type boundsJSON struct {
+	Min [2]float64 `json:"min"`
+	Max [2]float64 `json:"max"`
+}
+
+type featureJSON struct {
+	Name           string       `json:"name"`
+	Kind           string       `json:"kind"`
+	Number         int          `json:"number"`
+	Method         string       `json:"method"`
+	Cutter         *float64     `json:"cutter"`
+	Drill          *float64     `json:"drill,omitempty"`
+	Stylus         float64      `json:"stylus"`
+	Tip            string       `json:"tip"`
+	Compensation   float64      `json:"compensation"`
+	Status         string       `json:"status"`
+	Depth          string       `json:"depth"`
+	TemplateArea   *float64     `json:"template_area,omitempty"`
+	TemplateBounds *boundsJSON  `json:"template_bounds,omitempty"`
+	Seats          [][2]float64 `json:"seats,omitempty"`
+	Path           [][2]float64 `json:"path,omitempty"`
+	Width          *float64     `json:"width,omitempty"`
+}
+
+type stepJSON struct {
+	What    string       `json:"what"`
+	Feature string       `json:"feature,omitempty"`
+	Drill   *float64     `json:"drill,omitempty"`
+	Seats   [][2]float64 `json:"seats,omitempty"`
+}
+
+type warningJSON struct {
+	Feature string   `json:"feature"`
+	Message string   `json:"message"`
+	Amount  *float64 `json:"amount"`
+	Stops   bool     `json:"stops,omitempty"`
+}
+
+// digits is how many decimals of a millimetre the JSON keeps: a nanometre, far below what any
+// pantograph cuts, and enough to hide float noise such as 13.999999999999998.
+const digits = 1e6
+
+func round(v float64) float64 {
+	r := math.Round(v*digits) / digits
+	if r == 0 {
+		return 0 // no "-0"
+	}
+	return r
+}
+
+func ptr(v float64) *float64 { r := round(v); return &r }
+
+func vec(v geom.Vec) [2]float64 { return [2]float64{round(v.X), round(v.Y)} }
+
+func vecs(vs []geom.Vec) [][2]float64 {
+	var out [][2]float64
+	for _, v := range vs {
+		out = append(out, vec(v))
+	}
+	return out
+}
+
+func box(b geom.Box) boundsJSON { return boundsJSON{vec(b.Min), vec(b.Max)} }
+
+// Encode writes p to w as one indented JSON object.
+func Encode(w io.Writer, p pantograph.Plan) error {
+	out := planJSON{Part: p.Part, File: p.Source, Ratio: round(p.Ratio), Mirror: p.Mirror,
+		Rotate: round(p.Rotate.Degrees()), Datum: vec(p.Datum),
+		Template: templateJSON{box(p.Bounds)}, Features: []featureJSON{},
+		Order: append([]string{}, p.Order...), Steps: []stepJSON{}, Warnings: []warningJSON{},
+		Done: p.Done()}
+	for _, f := range p.Features {
+		out.Features = append(out.Features, feature(f))
+	}
+	for _, s := range p.Steps {
+		sj := stepJSON{What: string(s.What), Seats: vecs(s.Seats)}
+		if s.Feature >= 0 {
+			sj.Feature = p.Features[s.Feature].Name
+		}
+		if s.Drill > 0 {
+			sj.Drill = ptr(s.Drill)
+		}
+		out.Steps = append(out.Steps, sj)
+	}
+	for _, wr := range p.Warnings {
+		wj := warningJSON{Feature: wr.Feature, Message: wr.Message, Stops: wr.Stops}
+		if wr.HasAmount {
+			wj.Amount = ptr(wr.Amount)
+		}
+		out.Warnings = append(out.Warnings, wj)
+	}
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	if err := enc.Encode(out); err != nil {
+		return fmt.Errorf("planjson: %w", err)
+	}
+	return nil
+}
+
+// feature is the JSON view of one planned feature; fields that do not apply to its method
+// are left out (cutter is null for drilled holes).
+func feature(f pantograph.PlannedFeature) featureJSON {
+	fj := featureJSON{Name: f.Name, Kind: string(f.Kind), Number: f.Number, Method: string(f.Method),
+		Stylus: round(f.Stylus), Tip: string(f.Tip), Compensation: round(f.Compensation),
+		Status: string(f.Status), Depth: f.Depth.String()}
+	if f.Kind == pantograph.KindProfile || f.Kind == pantograph.KindCutout {
+		fj.Depth = "through"
+	}
+	if f.Cutter > 0 {
+		fj.Cutter = ptr(f.Cutter)
+	}
+	if !f.TemplateBounds.IsEmpty() {
+		b := box(f.TemplateBounds)
+		fj.TemplateBounds = &b
+	}
+	switch f.Method {
+	case pantograph.Traced:
+		fj.TemplateArea = ptr(f.TemplateArea)
+	case pantograph.Drilled:
+		fj.Drill, fj.Seats = ptr(f.Drill), vecs(f.Seats)
+	case pantograph.Engraved:
+		fj.Path, fj.Width = vecs(f.Path), ptr(f.Width)
+	}
+	return fj
+}

@@ -1,0 +1,167 @@
+package pantograph
+
+import (
+	"fmt"
+	"math"
+
+	"panto/geom"
+)
+
+// This file says what a round cutter cannot make of a feature, in mm at the part. A cutter of
+// radius r clearing an opening from inside can reach exactly the opening's morphological
+// opening: shrink it by r (where the cutter's centre can go) and grow that back by r. Clearing
+// round the profile from outside it leaves the closing: grow by r, shrink back. Whatever
+// differs between the drawn region and that is material the cutter leaves: at inside corners
+// sharper than the cutter, in necks narrower than it, or all of it when nothing is left after
+// shrinking. The same holds on the template for the stylus, since shrinking R·opening by δ and
+// then by r_s is shrinking it by R·r_c: where the cutter cannot go, neither can the stylus.
+
+// deviationTol is the material, in mm at the part, below which a feature counts as made as
+// drawn: a tenth of a micrometre, ten times finer than a micrometer reads (0.001 mm), and far
+// above the rounding of geom's exact offsets (about 1e-12 mm).
+const deviationTol = 1e-4
+
+// openingFit checks openings or recesses rs, all cut from inside with a cutter of diameter d.
+// Holes of one milled feature share their fate, so only the first that deviates is described.
+func openingFit(pf PlannedFeature, rs []geom.Region, d float64) (Status, []PlanWarning) {
+	st, ws, more := StatusOK, []PlanWarning(nil), 0
+	for _, r := range rs {
+		s, w := openingFitOne(pf, r, d)
+		st = worse(st, s)
+		switch {
+		case len(w) == 0:
+		case ws == nil:
+			ws = w
+		default:
+			more++
+		}
+	}
+	if more > 0 {
+		ws[len(ws)-1].Message += fmt.Sprintf(" (and the same at %d more)", more)
+	}
+	return st, ws
+}
+
+// openingFitOne checks one region cut from inside.
+func openingFitOne(pf PlannedFeature, r geom.Region, d float64) (Status, []PlanWarning) {
+	rc := d / 2
+	centre := r.Offset(-rc).Regions
+	if len(centre) == 0 {
+		amount, width := d, "too small"
+		if g, ok := r.NarrowestWidth(); ok {
+			amount, width = d-g.Width, mm(g.Width)+" wide at its narrowest"
+		}
+		return StatusLost, []PlanWarning{amountWarn(pf, amount,
+			"%s, smaller than the Ø%s cutter: the cutter cannot go in, nothing of it is cut", width, num(d))}
+	}
+	cut := geom.OffsetRegions(centre, rc)
+	var ws []PlanWarning
+	if len(centre) > 1 {
+		ws = append(ws, neckWarning(pf, r, d, len(centre)))
+	}
+	if c, ok := r.SharpestConvexCorner(); ok && c.Radius < rc-deviationTol {
+		ws = append(ws, cornerWarning(pf, c, d, cut)...)
+	}
+	return areaWarnings(pf, ws, r.Area()-areaOf(cut), r.Perimeter())
+}
+
+// profileFit checks the profile, cut round from outside with a cutter of diameter d.
+func profileFit(pf PlannedFeature, r geom.Region, d float64) (Status, []PlanWarning) {
+	rc := d / 2
+	made := geom.OffsetRegions(r.Offset(rc).Regions, -rc)
+	var ws []PlanWarning
+	if g, ok := r.NarrowestGap(); ok && g.Width < d-deviationTol {
+		at := g.A.Lerp(g.B, 0.5)
+		ws = append(ws, amountWarn(pf, d-g.Width,
+			"the notch at %s is %s wide, narrower than the Ø%s cutter: it is not cut to the bottom",
+			pt(at.X, at.Y), mm(g.Width), num(d)))
+	}
+	if c, ok := r.SharpestConcaveCorner(); ok && c.Radius < rc-deviationTol {
+		ws = append(ws, cornerWarning(pf, c, d, made)...)
+	}
+	return areaWarnings(pf, ws, areaOf(made)-r.Area(), r.Perimeter())
+}
+
+// neckWarning describes an opening the cutter can only cut as n separate pieces.
+func neckWarning(pf PlannedFeature, r geom.Region, d float64, n int) PlanWarning {
+	g, ok := r.NarrowestWidth()
+	if !ok {
+		return warnf(pf, "the Ø%s cutter cannot pass its narrowest place: it comes out as %d separate openings", num(d), n)
+	}
+	at := g.A.Lerp(g.B, 0.5)
+	return amountWarn(pf, d-g.Width,
+		"it narrows to %s at %s, less than the Ø%s cutter: it comes out as %d separate openings with material left between them",
+		mm(g.Width), pt(at.X, at.Y), num(d), n)
+}
+
+// cornerWarning describes the material a cutter of diameter d leaves in corner c, as the
+// distance from the drawn corner to the edge the cutter makes (cut). For a sharp corner of
+// inside angle θ that is r(1/sin(θ/2) − 1); r(√2 − 1) at 90°.
+func cornerWarning(pf PlannedFeature, c geom.Corner, d float64, cut []geom.Region) []PlanWarning {
+	left := math.Inf(1)
+	for _, r := range cut {
+		for _, k := range r.Contours() {
+			left = math.Min(left, distToContour(k, c.At))
+		}
+	}
+	if !(left > deviationTol) || math.IsInf(left, 1) {
+		return nil
+	}
+	drawn := "sharp"
+	if c.Radius > 0 {
+		drawn = "R" + num(c.Radius)
+	}
+	return []PlanWarning{amountWarn(pf, left,
+		"the inside corner at %s is drawn %s; the Ø%s cutter rounds it to R%s and leaves %s of material in the corner",
+		pt(c.At.X, c.At.Y), drawn, num(d), num(d/2), mm(left))}
+}
+
+// areaWarnings adds the area a cutter leaves (uncut, mm²) to the warnings about a feature and
+// returns its status. Differences within deviationTol of the outline all round count as none.
+func areaWarnings(pf PlannedFeature, ws []PlanWarning, uncut, perimeter float64) (Status, []PlanWarning) {
+	if uncut <= deviationTol*perimeter {
+		if len(ws) == 0 {
+			return StatusOK, nil
+		}
+		return StatusDeviates, ws
+	}
+	a := fmt.Sprintf("%s mm² in all stays uncut", num(uncut))
+	if uncut < 0.001 {
+		a = fmt.Sprintf("%.2g mm² in all stays uncut", uncut)
+	}
+	if len(ws) == 0 {
+		return StatusDeviates, []PlanWarning{warnf(pf, "the cutter cannot reach every part of it: %s", a)}
+	}
+	ws[len(ws)-1].Message += "; " + a
+	return StatusDeviates, ws
+}
+
+// areaOf sums the areas of rs.
+func areaOf(rs []geom.Region) float64 {
+	var a float64
+	for _, r := range rs {
+		a += r.Area()
+	}
+	return a
+}
+
+// worse returns the worse of two statuses.
+func worse(a, b Status) Status {
+	rank := map[Status]int{StatusOK: 0, StatusDeviates: 1, StatusLost: 2}
+	if rank[b] > rank[a] {
+		return b
+	}
+	return a
+}
+
+// warnf builds a warning about a planned feature, without an amount.
+func warnf(pf PlannedFeature, format string, args ...any) PlanWarning {
+	return PlanWarning{Feature: pf.Name, Label: pf.Label, Message: fmt.Sprintf(format, args...)}
+}
+
+// amountWarn builds a warning about a planned feature with an amount in mm at the part.
+func amountWarn(pf PlannedFeature, amount float64, format string, args ...any) PlanWarning {
+	w := warnf(pf, format, args...)
+	w.Amount, w.HasAmount = amount, true
+	return w
+}

@@ -1,0 +1,219 @@
+package pantograph
+
+import (
+	"fmt"
+	"strings"
+
+	"panto/geom"
+)
+
+// Plan is what goes on the copy table for one part at one setup: the template's geometry per
+// feature in the template frame, the tools, the order of work and every warning. It is a plain
+// value holding everything the writers need (template plate, drawings, dial sheet); they
+// compute nothing about machining themselves.
+//
+// Frames: Datum and every Warning amount are in the part frame and part mm. Everything named
+// Template…, Seats, Path and Bounds is in the template frame: mm on the copy table, R times the
+// part, origin at the datum seat, mirrored and turned as the setup asks (see Transform).
+type Plan struct {
+	Part   string // the part's name
+	Source string // the part file, for messages
+	Stock  Stock
+	Setup  Setup // as given, after validation
+
+	Ratio  float64
+	Mirror bool
+	Rotate geom.Angle
+	Datum  geom.Vec // part frame: the point the dials are zeroed on, template origin
+
+	// Transform maps the part frame to the template frame: translate(−Datum), then FlipX when
+	// Mirror, then Rotate, then Scale(Ratio).
+	Transform geom.Transform
+
+	// Bounds holds everything on the template: traced regions, seats and groove channels.
+	Bounds geom.Box
+
+	Features []PlannedFeature // the profile first, then the part's features in file order
+	Steps    []Step           // the order of work, datum first, profile last
+	Order    []string         // feature names in working order, each once
+
+	Warnings []PlanWarning // what will not come out as drawn, what the machine cannot do
+}
+
+// Method is how a feature is made.
+type Method string
+
+// The methods.
+const (
+	Traced   Method = "traced"   // the stylus follows the template's edge
+	Drilled  Method = "drilled"  // the stylus drops into a seat, a drill makes the hole
+	Engraved Method = "engraved" // the stylus runs along a channel of its own width
+)
+
+// Status says how a feature will come out.
+type Status string
+
+// The statuses of a planned feature.
+const (
+	StatusOK       Status = "ok"       // as drawn
+	StatusDeviates Status = "deviates" // made, but not exactly as drawn (see the warnings)
+	StatusLost     Status = "lost"     // the cutter cannot make it at all
+)
+
+// PlannedFeature is one feature of the part as the template carries it.
+type PlannedFeature struct {
+	Name   string // the feature's name, or its kind when unnamed ("profile")
+	Label  string // as Feature.Label: the table and the name
+	Kind   Kind
+	Number int // its place in the order of work, from 1; the number sheets and labels show
+	Method Method
+
+	Cutter float64 // mm; 0 for drilled holes
+	Drill  float64 // mm; the drill for drilled holes, else 0
+	Stylus float64 // mm
+	Tip    Tip
+	// Compensation is δ = R·r_c − r_s in template mm; traced edges move by it away from
+	// R × the part (out for the profile, in for openings). 0 for seats and grooves.
+	Compensation float64
+	Status       Status
+
+	// TemplateRegions are the areas whose edges the stylus traces: for the profile the
+	// template outline, for openings each opening as a region (the template plate has them
+	// as holes). Empty for drilled holes and grooves, and for a lost feature.
+	TemplateRegions []geom.Region
+	TemplateArea    float64  // mm², sum over TemplateRegions
+	TemplateBounds  geom.Box // of what the feature puts on the template
+
+	Seats []geom.Vec // drilled holes: where the stylus drops in, in working order
+
+	Path  []geom.Vec // grooves: the centreline on the template
+	Width float64    // grooves: the channel's width on the template (the stylus diameter)
+
+	Depth Depth
+}
+
+// Step is one thing done at the machine, in order.
+type Step struct {
+	What    StepKind
+	Feature int        // index into Plan.Features; −1 for the datum
+	Drill   float64    // for a drill step, the drill's diameter in mm
+	Seats   []geom.Vec // for a drill step, the seats in the order to visit them (template frame)
+}
+
+// StepKind says what a step does.
+type StepKind string
+
+// The kinds of step.
+const (
+	StepDatum   StepKind = "datum"   // zero the dials with the stylus in the datum seat
+	StepDrill   StepKind = "drill"   // drill the holes of one feature at their seats
+	StepMill    StepKind = "mill"    // trace an opening, recess or the profile
+	StepEngrave StepKind = "engrave" // run along a groove
+)
+
+// PlanWarning is something the plan says will not come out as drawn, or that the machine cannot
+// do. Amount is in mm at the part when HasAmount.
+type PlanWarning struct {
+	Feature   string // the feature's name; "" for the whole plan
+	Label     string // the feature's label, for messages
+	Message   string
+	Amount    float64
+	HasAmount bool
+	// Stops is true when the job cannot be done as planned whatever the machinist accepts
+	// (the template does not fit the copy table, the ratio cannot be set).
+	Stops bool
+}
+
+func (w PlanWarning) String() string {
+	if w.Label == "" {
+		return w.Message
+	}
+	return w.Label + ": " + w.Message
+}
+
+// Lost returns the names of the features the cutter cannot make.
+func (p Plan) Lost() []string {
+	var out []string
+	for _, f := range p.Features {
+		if f.Status == StatusLost {
+			out = append(out, f.Name)
+		}
+	}
+	return out
+}
+
+// Done reports whether the plan can be carried out: nothing stops it, and nothing is lost
+// unless the setup accepts losses.
+func (p Plan) Done() bool {
+	for _, w := range p.Warnings {
+		if w.Stops {
+			return false
+		}
+	}
+	return p.Setup.AcceptLoss || len(p.Lost()) == 0
+}
+
+// PartErrors is the error PlanPart returns for a part that fails its checks: a part with
+// errors cannot be planned.
+type PartErrors []Problem
+
+func (e PartErrors) Error() string {
+	var b strings.Builder
+	fmt.Fprintf(&b, "the part has %d error(s); run panto check on it", len(e))
+	for _, p := range e {
+		b.WriteString("\n" + p.Error())
+	}
+	return b.String()
+}
+
+// PlanPart plans the template for part p at setup s. m is the machine, or nil without a
+// machine file: then every tool size counts as at hand and nothing limits the template's size.
+// The part must pass Check without errors (PartErrors otherwise); a bad setup is an error too.
+// What the cutter cannot make is not an error: it is in the plan's warnings and statuses.
+func PlanPart(p Part, s Setup, m *Machine) (Plan, error) {
+	if err := s.Validate(); err != nil {
+		return Plan{}, err
+	}
+	probs := Check(p, DefaultOptions())
+	if HasErrors(probs) {
+		var errs PartErrors
+		for _, pr := range probs {
+			if pr.Severity == Error {
+				errs = append(errs, pr)
+			}
+		}
+		return Plan{}, errs
+	}
+	pl := planner{part: p, setup: s, machine: m, t: s.Transform(p.Datum)}
+	out := Plan{Part: p.Name, Source: p.Source, Stock: p.Stock, Setup: s, Ratio: s.Ratio,
+		Mirror: s.Mirror, Rotate: s.Rotate, Datum: p.Datum, Transform: pl.t}
+	out.Warnings = partWarnings(p, probs)
+	for _, f := range p.All() {
+		pf, ws := pl.plan(f)
+		out.Features = append(out.Features, pf)
+		out.Warnings = append(out.Warnings, ws...)
+	}
+	out.Bounds = geom.EmptyBox().AddPoint(geom.Vec{})
+	for _, f := range out.Features {
+		if !f.TemplateBounds.IsEmpty() {
+			out.Bounds = out.Bounds.Union(f.TemplateBounds)
+		}
+	}
+	out.order()
+	out.Warnings = append(out.Warnings, machineWarnings(out, m)...)
+	return out, nil
+}
+
+// partWarnings carries the part's own warnings (thin walls, say) into the plan.
+func partWarnings(p Part, probs []Problem) []PlanWarning {
+	names := map[string]string{}
+	for _, f := range p.All() {
+		names[f.Label()] = featureName(f)
+	}
+	var ws []PlanWarning
+	for _, pr := range probs {
+		ws = append(ws, PlanWarning{Feature: names[pr.Feature], Label: pr.Feature, Message: pr.Message,
+			Amount: pr.Amount, HasAmount: pr.HasAmount})
+	}
+	return ws
+}

@@ -1,0 +1,188 @@
+package pantograph
+
+import (
+	"math"
+
+	"panto/geom"
+)
+
+// This file turns each feature into what the template carries for it, in the template frame:
+// traced edges offset by the compensation δ = R·r_c − r_s (the stylus runs outside the profile
+// and inside every opening, so the profile grows by δ and openings shrink by δ), seats for
+// drilled holes, and a channel as wide as the stylus for grooves.
+
+// sizeTol is how near, in mm, two tool diameters must be to count as the same size: tool sizes
+// are marked to 0.001 mm at best, and inch sizes converted to mm agree far closer than this.
+const sizeTol = 5e-4
+
+// planner holds what every feature's plan needs.
+type planner struct {
+	part    Part
+	setup   Setup
+	machine *Machine // nil without a machine file
+	t       geom.Transform
+}
+
+// plan returns the template of one feature with its status and warnings.
+func (pl planner) plan(f Feature) (PlannedFeature, []PlanWarning) {
+	pf := PlannedFeature{Name: featureName(f), Label: f.Label(), Kind: f.Kind, Depth: f.Depth}
+	switch f.Kind {
+	case KindProfile:
+		return pl.traced(pf, []geom.Region{f.Region}, false)
+	case KindCutout, KindPocket, KindSlot:
+		return pl.traced(pf, []geom.Region{f.Region}, true)
+	case KindHoles:
+		return pl.holes(pf, f)
+	case KindGroove:
+		return pl.groove(pf, f)
+	}
+	return pf, nil
+}
+
+// featureName is a feature's name, or its kind when it has none (the profile usually).
+func featureName(f Feature) string {
+	if f.Name == "" {
+		return string(f.Kind)
+	}
+	return f.Name
+}
+
+// tools fills in the cutter, stylus, tip and compensation of a feature cut with cutter.
+func (pl planner) tools(pf PlannedFeature, cutter float64) PlannedFeature {
+	pf.Cutter = cutter
+	pf.Stylus, pf.Tip = pl.stylusFor(cutter)
+	pf.Compensation = compensation(pl.setup.Ratio, cutter, pf.Stylus, pf.Tip)
+	return pf
+}
+
+// stylusFor returns the stylus used with a cutter: the setup's own when it names one, else
+// the owned stylus nearest to matched when the machine lists styli, else a matched one.
+func (pl planner) stylusFor(cutter float64) (float64, Tip) {
+	tip := pl.setup.Tip
+	if tip == "" {
+		tip = TipRound
+	}
+	if pl.setup.Stylus > 0 {
+		return pl.setup.Stylus, tip
+	}
+	if pl.machine != nil {
+		if c, ok := ChooseStylus(*pl.machine, pl.setup.Ratio, cutter); ok {
+			if c.Stylus.Tip != "" {
+				tip = c.Stylus.Tip
+			}
+			return c.Stylus.Diameter, tip
+		}
+	}
+	return pl.setup.MatchedStylus(cutter), tip
+}
+
+// traced plans a feature whose edges the stylus follows: the profile (inside == false, the
+// stylus runs outside it) or openings and recesses (inside, the stylus runs within).
+func (pl planner) traced(pf PlannedFeature, rs []geom.Region, inside bool) (PlannedFeature, []PlanWarning) {
+	pf = pl.tools(pf, pl.setup.CutterFor(pf.Kind))
+	pf.Method = Traced
+	var ws []PlanWarning
+	if inside {
+		pf.Status, ws = openingFit(pf, rs, pf.Cutter)
+	} else {
+		pf.Status, ws = profileFit(pf, rs[0], pf.Cutter)
+	}
+	if pf.Status == StatusLost {
+		return pf, ws
+	}
+	d := pf.Compensation
+	if inside {
+		d = -d
+	}
+	pf.TemplateBounds = geom.EmptyBox()
+	for _, r := range rs {
+		for _, tr := range r.Transform(pl.t).Offset(d).Regions {
+			pf.TemplateRegions = append(pf.TemplateRegions, tr)
+			pf.TemplateArea += tr.Area()
+			pf.TemplateBounds = pf.TemplateBounds.Union(tr.Bounds())
+		}
+	}
+	if len(pf.TemplateRegions) == 0 {
+		pf.Status = StatusLost
+		ws = append(ws, warnf(pf, "the stylus Ø%s cannot enter the template opening at all", num(pf.Stylus)))
+	}
+	return pf, ws
+}
+
+// holes plans a holes feature: seats for a drill, or traced openings when the holes are milled.
+func (pl planner) holes(pf PlannedFeature, f Feature) (PlannedFeature, []PlanWarning) {
+	cutter := pl.setup.CutterFor(KindHoles)
+	drill, haveDrill := pl.drillFor(f.Diameter)
+	larger := f.Diameter > cutter+sizeTol
+	if larger && (pl.setup.MillHoles || !haveDrill) {
+		rs := make([]geom.Region, len(f.Centers))
+		for i := range f.Centers {
+			rs[i] = geom.NewRegion(f.HoleContour(i))
+		}
+		pf, ws := pl.traced(pf, rs, true)
+		if !haveDrill && !pl.setup.MillHoles {
+			ws = append(ws, warnf(pf, "no drill of Ø%s at hand: milled with the Ø%s cutter instead", num(f.Diameter), num(cutter)))
+		}
+		return pf, ws
+	}
+	// The stylus that traces the rest of the job drops into the seats.
+	pf.Stylus, pf.Tip = pl.stylusFor(pl.setup.Cutter)
+	pf.Method, pf.Status = Drilled, StatusOK
+	pf.Drill = f.Diameter
+	pf.TemplateBounds = geom.EmptyBox()
+	for _, c := range f.Centers {
+		s := pl.t.Apply(c)
+		pf.Seats = append(pf.Seats, s)
+		pf.TemplateBounds = pf.TemplateBounds.Union(geom.Box{Min: s, Max: s}.Expand(pf.Stylus / 2))
+	}
+	var ws []PlanWarning
+	if !haveDrill {
+		w := warnf(pf, "no drill of Ø%s at hand", num(f.Diameter))
+		if drill > 0 {
+			w = amountWarn(pf, math.Abs(drill-f.Diameter), "no drill of Ø%s at hand; the nearest is Ø%s", num(f.Diameter), num(drill))
+		}
+		ws = append(ws, w)
+	}
+	return pf, ws
+}
+
+// drillFor returns the drill at hand nearest to diameter d and whether it is d. Without a
+// machine file, or with one that lists no drills, every size counts as at hand.
+func (pl planner) drillFor(d float64) (float64, bool) {
+	if pl.machine == nil || len(pl.machine.Drills) == 0 {
+		return d, true
+	}
+	best := pl.machine.Drills[0].Diameter
+	for _, dr := range pl.machine.Drills {
+		if math.Abs(dr.Diameter-d) < math.Abs(best-d) {
+			best = dr.Diameter
+		}
+	}
+	return best, math.Abs(best-d) <= sizeTol
+}
+
+// groove plans an engraved line: its centreline on the template, in a channel as wide as the
+// stylus. A groove drawn wider or narrower than the cutter comes out the cutter's width.
+func (pl planner) groove(pf PlannedFeature, f Feature) (PlannedFeature, []PlanWarning) {
+	pf = pl.tools(pf, pl.setup.CutterFor(KindGroove))
+	pf.Compensation, pf.Method, pf.Status = 0, Engraved, StatusOK
+	pf.Width = pf.Stylus
+	pf.TemplateBounds = geom.EmptyBox()
+	for _, p := range f.Path {
+		q := pl.t.Apply(p)
+		pf.Path = append(pf.Path, q)
+		pf.TemplateBounds = pf.TemplateBounds.AddPoint(q)
+	}
+	pf.TemplateBounds = pf.TemplateBounds.Expand(pf.Width / 2)
+	if f.Width > 0 && math.Abs(f.Width-pf.Cutter) > sizeTol {
+		pf.Status = StatusDeviates
+		return pf, []PlanWarning{amountWarn(pf, math.Abs(f.Width-pf.Cutter),
+			"drawn %s wide, but the Ø%s cutter engraves it %s wide", mm(f.Width), num(pf.Cutter), mm(pf.Cutter))}
+	}
+	return pf, nil
+}
+
+// compensation is δ = R·r_c − r_s in template mm for a stylus of the given diameter and tip.
+func compensation(ratio, cutter, stylus float64, tip Tip) float64 {
+	return Compensation(ratio, cutter, Stylus{Diameter: stylus, Tip: tip}.TracingDiameter())
+}
