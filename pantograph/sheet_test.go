@@ -1,0 +1,127 @@
+package pantograph
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"panto/geom"
+)
+
+// sheetPlan is a hand-made plan at 10:1: the datum, two drilled holes of one feature whose
+// seats go right then back left (a reversal on copy X), and a pocket traced from (−20, 30), to
+// the left of the datum, so the X dials need datum turns.
+func sheetPlan() Plan {
+	sq := geom.Polygon(geom.V(-20, 30), geom.V(0, 30), geom.V(0, 50), geom.V(-20, 50))
+	return Plan{
+		Part: "test plate", Stock: Stock{Material: "brass", Thickness: 1.2}, Ratio: 10,
+		Features: []PlannedFeature{
+			{Name: "pins", Kind: KindHoles, Number: 1, Method: Drilled, Drill: 0.6, Stylus: 3, Tip: TipPointed,
+				Depth: Depth{Through: true}, Seats: []geom.Vec{geom.V(60, 20), geom.V(40, 20)}},
+			{Name: "recess", Kind: KindPocket, Number: 2, Method: Traced, Cutter: 0.5, Stylus: 5, Tip: TipRound,
+				Depth: Depth{MM: 0.3}, TemplateRegions: []geom.Region{geom.NewRegion(sq)}},
+		},
+		Steps: []Step{
+			{What: StepDatum, Feature: -1},
+			{What: StepDrill, Feature: 0, Drill: 0.6, Seats: []geom.Vec{geom.V(60, 20), geom.V(40, 20)}},
+			{What: StepMill, Feature: 1},
+		},
+	}
+}
+
+func sheetMachine() Machine {
+	metric := Dial{Pitch: 2, Divisions: 100, Units: MM, Backlash: 0.05} // 0.02 mm/div
+	return Machine{Name: "bench", Dials: Dials{CopyX: metric, CopyY: metric, WorkX: Dial{Pitch: 1, Divisions: 50},
+		WorkY: Dial{Pitch: 1, Divisions: 50}, Depth: Dial{Pitch: 1, Divisions: 100}},
+		Spindle: Spindle{MaxRPM: 15000}, Drills: []Drill{{Diameter: 0.6, Material: "carbide"}}}
+}
+
+func TestBuildSheetRows(t *testing.T) {
+	s := BuildSheet(sheetPlan(), sheetMachine(), SheetOptions{Date: "2026-12-01"})
+	if len(s.Rows) != 4 {
+		t.Fatalf("got %d rows, want 4 (datum, 2 holes, pocket)", len(s.Rows))
+	}
+	// The pocket starts at template X = −20: derived DatumTurns = ⌈20/2⌉ = 10, so the datum
+	// reads 10 t 0 div and the pocket's start 0 t 0 div.
+	if got := s.Dials[0].DatumTurns; got != 10 {
+		t.Errorf("copy X datum turns: got %v, want 10", got)
+	}
+	tests := []struct {
+		row        int
+		copyX      string
+		copyY      string
+		workX      string
+		backOff    int
+		passes     int
+		feature    string
+		firstDepth float64
+	}{
+		// derived: 20 + 60 = 80 mm = 40 t; Y 20 mm = 10 t; work X 6 mm + 2 mm (20 template
+		// mm shift is 2 part mm, but the work dial has its own datum: −2 part mm needs 2 turns
+		// of 1 mm) = 8 mm = 8 t. Pecks (derived): 0.3, then every 0.15 to 1.35 (8), then the
+		// full 1.43024 (through 1.2 + point 0.18 + 0.05): 9.
+		{1, "40 t 0 div", "10 t 0 div", "8 t 0 div", 0, 9, "pins", 0.3},
+		// derived: 20 + 40 = 60 mm = 30 t, behind 80: a reversal on copy X and work X.
+		{2, "30 t 0 div", "10 t 0 div", "6 t 0 div", 2, 0, "pins", 0},
+		// derived: 0 mm = 0 t; 30 mm = 15 t; work X 0 t; behind the hole: reversal on X again.
+		{3, "0 t 0 div", "15 t 0 div", "0 t 0 div", 2, 3, "recess", 0.1},
+	}
+	for _, tc := range tests {
+		r := s.Rows[tc.row]
+		t.Run(r.Action, func(t *testing.T) {
+			w := r.Where
+			if got := w.CopyX.String(); got != tc.copyX {
+				t.Errorf("copy X: got %v, want %v", got, tc.copyX)
+			}
+			if got := w.CopyY.String(); got != tc.copyY {
+				t.Errorf("copy Y: got %v, want %v", got, tc.copyY)
+			}
+			if got := w.WorkX.String(); got != tc.workX {
+				t.Errorf("work X: got %v, want %v", got, tc.workX)
+			}
+			if len(w.BackOff) != tc.backOff {
+				t.Errorf("back-offs: got %v, want %d", w.BackOff, tc.backOff)
+			}
+			if len(r.Passes) != tc.passes || r.Feature != tc.feature {
+				t.Errorf("got %d passes for %q, want %d for %q", len(r.Passes), r.Feature, tc.passes, tc.feature)
+			}
+			if tc.passes > 0 && math.Abs(r.Passes[0].Depth-tc.firstDepth) > 1e-9 {
+				t.Errorf("first pass: got %v, want %v", r.Passes[0].Depth, tc.firstDepth)
+			}
+		})
+	}
+}
+
+func TestBuildSheetSpeedsAndDepth(t *testing.T) {
+	s := BuildSheet(sheetPlan(), sheetMachine(), SheetOptions{})
+	hole := s.Rows[1]
+	// carbide drill in brass: 61 × 2 = 122 m/min; at 0.6 mm that is 64 723 rpm (derived), capped.
+	if hole.RPM != 15000 || !strings.Contains(hole.SpeedNote, "capped") {
+		t.Errorf("drill speed: got %v (%q), want 15000 capped", hole.RPM, hole.SpeedNote)
+	}
+	// derived: 1 µm/rev × 15000 rpm = 15 mm/min.
+	if math.Abs(hole.Feed-15) > 1e-9 {
+		t.Errorf("drill feed: got %v, want 15", hole.Feed)
+	}
+	// derived: through 1.2 + 0.3004·0.6 + 0.05 = 1.43024 mm; last peck reads 1 t 43 div +0.02.
+	last := hole.Passes[len(hole.Passes)-1]
+	if math.Abs(last.Depth-1.43024) > 1e-9 || last.Reading.Turns != 1 || last.Reading.Divisions != 43 {
+		t.Errorf("last peck: got %v at %v, want 1.43024 at 1 t 43 div", last.Depth, last.Reading)
+	}
+	if len(s.Cautions) == 0 || len(s.Notes) == 0 {
+		t.Errorf("the sheet has no cautions or notes")
+	}
+}
+
+func TestBuildSheetNoDials(t *testing.T) {
+	s := BuildSheet(sheetPlan(), Machine{}, SheetOptions{})
+	for _, d := range s.Dials {
+		if d.Stated {
+			t.Errorf("dial %s stated without a machine", d.Name)
+		}
+	}
+	// positions are still there in mm: the second hole is 40 mm on the template, 4 at the part
+	if w := s.Rows[2].Where; w.Template.X != 40 || math.Abs(w.Part.X-4) > 1e-12 {
+		t.Errorf("got %v / %v, want 40 / 4", w.Template.X, w.Part.X)
+	}
+}
