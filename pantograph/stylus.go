@@ -65,8 +65,8 @@ func (c StylusChoice) Matches() bool { return c.Direction == DirectionNone }
 
 // ChooseStylus picks, from the styli the machine lists, the one whose tracing diameter is
 // nearest to R·d_c, and works out the compensation it needs. Ties go to the larger stylus (it
-// is stiffer and less likely to bend against the template), then to the one listed first. It returns false when the machine lists no styli, or when
-// ratio or cutter is not greater than 0.
+// is stiffer and less likely to bend against the template), then to the one listed first. It
+// returns false when the machine lists no styli, or when ratio or cutter is not greater than 0.
 func ChooseStylus(m Machine, ratio, cutter float64) (StylusChoice, bool) {
 	if len(m.Styli) == 0 || !(ratio > 0) || !(cutter > 0) {
 		return StylusChoice{}, false
@@ -80,7 +80,7 @@ func ChooseStylus(m Machine, ratio, cutter float64) (StylusChoice, bool) {
 	}
 	s := m.Styli[best]
 	d := Compensation(ratio, cutter, s.TracingDiameter())
-	return StylusChoice{Stylus: s, Index: best, Matched: want, Compensation: d, Direction: direction(d)}, true
+	return StylusChoice{Stylus: s, Index: best, Matched: want, Compensation: d, Direction: DirectionOf(d)}, true
 }
 
 // better reports whether stylus a is a better choice than b for the matched size want; on a
@@ -93,8 +93,10 @@ func better(a, b Stylus, want float64) bool {
 	return a.TracingDiameter() > b.TracingDiameter()+tieTol
 }
 
-// direction words which way a compensation δ moves the template.
-func direction(delta float64) string {
+// DirectionOf words which way a compensation δ (template mm) moves the template:
+// DirectionNone when |δ| is within half a thousandth of a millimetre, else DirectionGrow or
+// DirectionShrink.
+func DirectionOf(delta float64) string {
 	switch {
 	case math.Abs(delta) <= matchTol:
 		return DirectionNone

@@ -10,6 +10,7 @@ const usage = `panto prepares parts for a manual pantograph mill.
 Usage:
   panto check PART [--json] [--min-wall MM]   check a part file and say what limits the cutter
   panto plan PART --ratio R --cutter D [...]  plan the template: sizes, compensation, order of work
+  panto stylus --ratio R --cutter D [...]     the stylus for a cutter, or the cutter for a stylus
   panto help [COMMAND]                        show this help, or a command's help
   panto --version                             show panto's version
 
@@ -54,6 +55,44 @@ Flags:
   -h, --help      show this help
 `
 
+const stylusUsage = `Usage: panto stylus --ratio R --cutter D [--stylus D | --machine FILE] [--units mm|in] [--json]
+       panto stylus --ratio R --stylus D [--units mm|in] [--json]
+
+The stylus traces the template as the cutter cuts the part, R times larger, so the stylus that
+needs no compensation is R times the cutter:
+
+  --ratio 10 --cutter 0.3        the matched stylus, 3.000 mm
+  --ratio 10 --stylus 5          the matched cutter, 0.500 mm
+  --ratio 10 --cutter 0.5 --stylus 4.3
+                                 the compensation that stylus needs: the template's edges
+                                 move by δ = R × cutter radius − stylus radius (here +0.350 mm):
+                                 positive, the outline grows and openings shrink; negative,
+                                 the other way round
+  --machine FILE --ratio 10 --cutter 0.5
+                                 the nearest stylus the machine file lists (ties go to the
+                                 larger), its compensation, and a warning when the machine's
+                                 linkage cannot be set to the ratio
+
+A pointed stylus traces with its point, as if its diameter were 0.
+
+Flags:
+  --ratio R         ratio the linkage is set to, template size : part size (at least 1)
+  --cutter D        cutter diameter
+  --stylus D        stylus diameter
+  --machine FILE    machine file whose [[stylus]] set to choose from
+  --units mm|in     units of --cutter, --stylus and every length printed (default mm);
+                    millimetres print with 3 decimals, inches with 4
+  --json            print one JSON object instead: units, ratio, cutter,
+                    stylus (the diameter traced with: 0 for a pointed one),
+                    matched_stylus, matched_cutter, machine (its file), ratio_allowed,
+                    chosen_stylus {name, diameter, tip}, compensation (on the template),
+                    compensation_at_part, direction ("grow", "shrink", "none" or "");
+                    lengths in --units, null when not worked out
+  -h, --help        show this help
+
+Exit codes: 0 done, 1 the machine file lists no styli, 2 bad flags or a bad machine file.
+`
+
 // runHelp prints the general help or a command's help.
 func runHelp(args []string, stdout, stderr io.Writer) int {
 	switch {
@@ -63,6 +102,8 @@ func runHelp(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stdout, checkUsage, defaultMinWall)
 	case args[0] == "plan":
 		fmt.Fprint(stdout, planUsage)
+	case args[0] == "stylus":
+		fmt.Fprint(stdout, stylusUsage)
 	default:
 		fmt.Fprintf(stderr, "panto: no help for %q: there is no such command\n", args[0])
 		return exitUsage

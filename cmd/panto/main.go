@@ -37,6 +37,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return runCheck(rest, stdout, stderr)
 	case "plan":
 		return runPlan(rest, stdout, stderr)
+	case "stylus":
+		return runStylus(rest, stdout, stderr)
 	default:
 		fmt.Fprintf(stderr, "panto: unknown command %q\nRun 'panto help' to see the commands.\n", cmd)
 		return exitUsage

@@ -5,8 +5,9 @@ import (
 	"strings"
 )
 
-// Error is a mistake in a part or machine file, placed as exactly as the reader can: the file, the line,
-// the table and the key. Line is 0 when no line can be named (a table missing altogether).
+// Error is a mistake in a part or machine file, placed as exactly as the reader can: the file,
+// the line, the table and the key. Line is 0 when no line can be named (a table missing
+// altogether).
 type Error struct {
 	File  string
 	Line  int

@@ -1,0 +1,334 @@
+package main
+
+import (
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io"
+	"io/fs"
+	"math"
+	"strings"
+
+	"github.com/spf13/pflag"
+
+	"panto/pantograph"
+	"panto/pantograph/partfile"
+)
+
+// stylusSynopsis is the usage line printed with a flag mistake.
+const stylusSynopsis = "Usage: panto stylus --ratio R (--cutter D | --stylus D | --cutter D --stylus D)\n" +
+	"                    [--machine FILE] [--units mm|in] [--json]\n"
+
+// stylusArgs are the flags of `panto stylus`, with lengths already in mm.
+type stylusArgs struct {
+	ratio, cutter, stylus float64
+	hasCutter, hasStylus  bool
+	machine               string
+	inch, json            bool
+}
+
+// runStylus is `panto stylus --ratio R (--cutter D | --stylus D | both) [--machine FILE]`.
+func runStylus(args []string, stdout, stderr io.Writer) int {
+	a, code, done := parseStylus(args, stdout, stderr)
+	if done {
+		return code
+	}
+	rep := stylusReport{args: a, units: pantograph.MM}
+	if a.inch {
+		rep.units = pantograph.Inch
+	}
+	if a.machine != "" {
+		m, err := partfile.ReadMachineFile(a.machine)
+		if err != nil {
+			return reportMachineError(err, stderr)
+		}
+		rep.machine = &m
+	}
+	rep.work()
+	var err error
+	if a.json {
+		err = rep.writeJSON(stdout)
+	} else {
+		err = rep.writeText(stdout)
+	}
+	if err != nil {
+		fmt.Fprintf(stderr, "panto stylus: %v\n", err)
+		return exitFailed
+	}
+	for _, w := range rep.warnings {
+		fmt.Fprintln(stderr, "panto stylus: warning: "+w)
+	}
+	if rep.failure != "" {
+		fmt.Fprintln(stderr, "panto stylus: "+rep.failure)
+		return exitFailed
+	}
+	return exitOK
+}
+
+// parseStylus reads and checks the flags; done is true when the command ends here with code.
+func parseStylus(args []string, stdout, stderr io.Writer) (a stylusArgs, code int, done bool) {
+	fl := pflag.NewFlagSet("stylus", pflag.ContinueOnError)
+	fl.SetOutput(io.Discard)
+	fl.Float64Var(&a.ratio, "ratio", 0, "ratio R, template size : part size")
+	fl.Float64Var(&a.cutter, "cutter", 0, "cutter diameter")
+	fl.Float64Var(&a.stylus, "stylus", 0, "stylus diameter")
+	fl.StringVar(&a.machine, "machine", "", "machine file")
+	units := fl.String("units", "mm", `"mm" or "in"`)
+	fl.BoolVar(&a.json, "json", false, "print JSON")
+	help := fl.BoolP("help", "h", false, "show help")
+	bad := func(format string, v ...any) (stylusArgs, int, bool) {
+		fmt.Fprintf(stderr, "panto stylus: "+format+"\n%sRun 'panto help stylus' for more.\n",
+			append(v, stylusSynopsis)...)
+		return a, exitUsage, true
+	}
+	if err := fl.Parse(args); err != nil {
+		return bad("%v", err)
+	}
+	if *help {
+		return a, runHelp([]string{"stylus"}, stdout, stderr), true
+	}
+	a.hasCutter, a.hasStylus = fl.Changed("cutter"), fl.Changed("stylus")
+	switch {
+	case fl.NArg() > 0:
+		return bad("unexpected argument %q: every value goes with a flag", fl.Arg(0))
+	case *units != "mm" && *units != "in":
+		return bad(`--units must be "mm" or "in", got %q`, *units)
+	case !fl.Changed("ratio"):
+		return bad("--ratio missing: give the ratio the linkage is set to, e.g. --ratio 10")
+	case !(a.ratio >= 1) || math.IsInf(a.ratio, 0):
+		return bad("--ratio is template size : part size and must be at least 1, got %g", a.ratio)
+	case !a.hasCutter && !a.hasStylus:
+		return bad("give --cutter (to find its stylus) or --stylus (to find its cutter), or both")
+	case a.hasCutter && !positive(a.cutter):
+		return bad("--cutter must be a diameter greater than 0, got %g", a.cutter)
+	case a.hasStylus && !positive(a.stylus):
+		return bad("--stylus must be a diameter greater than 0, got %g", a.stylus)
+	case a.machine != "" && !a.hasCutter:
+		return bad("--machine needs --cutter: panto picks the stylus for that cutter from the machine's set")
+	case a.machine != "" && a.hasStylus:
+		return bad("give --stylus or --machine, not both: with --machine panto picks the stylus from the machine's set")
+	}
+	a.inch = *units == "in"
+	if a.inch {
+		a.cutter *= pantograph.MMPerInch
+		a.stylus *= pantograph.MMPerInch
+	}
+	return a, exitOK, false
+}
+
+func positive(v float64) bool { return v > 0 && !math.IsInf(v, 1) }
+
+// reportMachineError explains why the machine file could not be read.
+func reportMachineError(err error, stderr io.Writer) int {
+	var pe *fs.PathError
+	if errors.As(err, &pe) {
+		fmt.Fprintf(stderr, "panto stylus: cannot read the machine file: %v\n", err)
+	} else {
+		fmt.Fprintln(stderr, err)
+	}
+	return exitUsage
+}
+
+// stylusReport is what `panto stylus` found, ready to print.
+type stylusReport struct {
+	args    stylusArgs
+	units   pantograph.Units
+	machine *pantograph.Machine
+
+	matchedStylus, matchedCutter float64 // mm; 0 when not worked out
+	stylus                       float64 // the stylus compensated for, mm
+	choice                       *pantograph.StylusChoice
+	delta                        float64 // δ in template mm
+	direction                    string  // "" when no stylus and cutter pair was worked out
+	warnings                     []string
+	failure                      string // why the job could not be done; "" when it was
+}
+
+// work does the arithmetic; the library holds the rules, this only picks which ones apply.
+func (r *stylusReport) work() {
+	a := r.args
+	if a.hasCutter {
+		r.matchedStylus = pantograph.MatchedStylus(a.ratio, a.cutter)
+	} else {
+		r.matchedCutter = pantograph.MatchedCutter(a.ratio, a.stylus)
+	}
+	r.stylus = a.stylus
+	if a.hasCutter && a.hasStylus {
+		r.delta = pantograph.Compensation(a.ratio, a.cutter, a.stylus)
+		r.direction = pantograph.DirectionOf(r.delta)
+	}
+	if r.machine == nil {
+		return
+	}
+	if !r.machine.Ratio.Allows(a.ratio) {
+		r.warnings = append(r.warnings, fmt.Sprintf("%s cannot be set to %g:1 (its ratio: %s)",
+			machineName(*r.machine), a.ratio, r.machine.Ratio))
+	}
+	c, ok := pantograph.ChooseStylus(*r.machine, a.ratio, a.cutter)
+	if !ok {
+		r.failure = fmt.Sprintf("%s lists no styli: add a [[stylus]] table for each one you own", r.machine.Source)
+		return
+	}
+	r.choice, r.stylus = &c, c.Stylus.TracingDiameter()
+	r.delta, r.direction = c.Compensation, c.Direction
+}
+
+// machineName names the machine in messages: its name, or its file.
+func machineName(m pantograph.Machine) string {
+	if m.Name != "" {
+		return "the " + m.Name
+	}
+	return m.Source
+}
+
+// length formats a length given in mm in the report's units: 3 decimals for mm (a micrometre),
+// 4 for inches (a ten-thousandth), as the help says.
+func (r *stylusReport) length(mm float64) string {
+	if r.units == pantograph.Inch {
+		return fmt.Sprintf("%.4f in", noNegZero(mm/pantograph.MMPerInch, 4))
+	}
+	return fmt.Sprintf("%.3f mm", noNegZero(mm, 3))
+}
+
+// noNegZero returns 0 for a value that would print as -0 at the given decimals.
+func noNegZero(v float64, decimals int) float64 {
+	if math.Abs(v) < 0.5*math.Pow(10, -float64(decimals)) {
+		return 0
+	}
+	return v
+}
+
+// writeText prints the report as a few labelled lines.
+func (r *stylusReport) writeText(w io.Writer) error {
+	var b strings.Builder
+	line := func(label, text string) { fmt.Fprintf(&b, "%-16s%s\n", label, text) }
+	a := r.args
+	if m := r.machine; m != nil {
+		line("machine", fmt.Sprintf("%s (%s)", nameOr(m.Name, "unnamed"), m.Source))
+	}
+	line("ratio", fmt.Sprintf("%g:1", a.ratio))
+	if a.hasCutter {
+		line("cutter", r.length(a.cutter))
+		line("matched stylus", r.length(r.matchedStylus)+"   (ratio × cutter; needs no compensation)")
+	} else {
+		line("stylus", r.length(a.stylus))
+		line("matched cutter", r.length(r.matchedCutter)+"   (stylus ÷ ratio)")
+	}
+	if c := r.choice; c != nil {
+		line("nearest owned", fmt.Sprintf("%q, %s", c.Stylus.Name, r.describeStylus(c.Stylus)))
+	} else if a.hasCutter && a.hasStylus {
+		line("stylus", r.length(a.stylus))
+	}
+	if r.direction != "" {
+		r.compensationLines(line)
+	}
+	_, err := io.WriteString(w, b.String())
+	return err
+}
+
+// describeStylus says a stylus's size and tip; a pointed one traces with its point.
+func (r *stylusReport) describeStylus(s pantograph.Stylus) string {
+	if s.Tip == pantograph.TipPointed {
+		return "pointed (traces with its point, as a 0 diameter)"
+	}
+	return r.length(s.Diameter) + " round"
+}
+
+// compensationLines prints δ and which way the template moves.
+func (r *stylusReport) compensationLines(line func(label, text string)) {
+	d := math.Abs(r.delta)
+	if r.direction == pantograph.DirectionNone {
+		line("compensation", fmt.Sprintf("none: the stylus matches; the template is the part enlarged %g times, with no offset", r.args.ratio))
+		return
+	}
+	sign := "+"
+	if r.delta < 0 {
+		sign = "-"
+	}
+	line("compensation", fmt.Sprintf("%s%s on the template (δ = ratio × cutter radius − stylus radius)",
+		sign, r.length(d)))
+	if r.direction == pantograph.DirectionGrow {
+		line("", fmt.Sprintf("the template's outline must grow by %s; openings shrink by %s", r.length(d), r.length(d)))
+	} else {
+		line("", fmt.Sprintf("the template's outline must shrink by %s; openings grow by %s", r.length(d), r.length(d)))
+	}
+	line("", fmt.Sprintf("left out, every traced edge would be off by %s at the part", r.length(d/r.args.ratio)))
+}
+
+func nameOr(s, alt string) string {
+	if s == "" {
+		return alt
+	}
+	return s
+}
+
+// stylusJSON is what `panto stylus --json` prints; lengths are in Units, null when not
+// worked out.
+type stylusJSON struct {
+	Units         string      `json:"units"`
+	Ratio         float64     `json:"ratio"`
+	Cutter        *float64    `json:"cutter"`
+	Stylus        *float64    `json:"stylus"`
+	MatchedStylus *float64    `json:"matched_stylus"`
+	MatchedCutter *float64    `json:"matched_cutter"`
+	Machine       *string     `json:"machine"`
+	RatioAllowed  *bool       `json:"ratio_allowed"`
+	Chosen        *chosenJSON `json:"chosen_stylus"`
+	Compensation  *float64    `json:"compensation"`
+	AtPart        *float64    `json:"compensation_at_part"`
+	Direction     string      `json:"direction"`
+}
+
+type chosenJSON struct {
+	Name     string  `json:"name"`
+	Diameter float64 `json:"diameter"`
+	Tip      string  `json:"tip"`
+}
+
+// writeJSON prints the report as one JSON object.
+func (r *stylusReport) writeJSON(w io.Writer) error {
+	a := r.args
+	conv := func(mm float64) *float64 {
+		if r.units == pantograph.Inch {
+			mm /= pantograph.MMPerInch
+		}
+		v := round(mm)
+		return &v
+	}
+	out := stylusJSON{Units: string(r.units), Ratio: a.ratio, Direction: jsonDirection(r.direction)}
+	if a.hasCutter {
+		out.Cutter, out.MatchedStylus = conv(a.cutter), conv(r.matchedStylus)
+	} else {
+		out.MatchedCutter = conv(r.matchedCutter)
+	}
+	if a.hasStylus || r.choice != nil {
+		out.Stylus = conv(r.stylus)
+	}
+	if m := r.machine; m != nil {
+		allowed := m.Ratio.Allows(a.ratio)
+		out.Machine, out.RatioAllowed = &m.Source, &allowed
+	}
+	if c := r.choice; c != nil {
+		out.Chosen = &chosenJSON{Name: c.Stylus.Name, Diameter: *conv(c.Stylus.Diameter), Tip: string(c.Stylus.Tip)}
+	}
+	if r.direction != "" {
+		out.Compensation, out.AtPart = conv(r.delta), conv(r.delta/a.ratio)
+	}
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(out)
+}
+
+// jsonDirection names a direction in one word for scripts: "grow" (the outline grows, openings
+// shrink), "shrink" (the other way), "none", or "" when no stylus was compensated for.
+func jsonDirection(d string) string {
+	switch d {
+	case pantograph.DirectionNone:
+		return "none"
+	case pantograph.DirectionGrow:
+		return "grow"
+	case pantograph.DirectionShrink:
+		return "shrink"
+	}
+	return ""
+}
