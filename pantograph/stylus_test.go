@@ -1,6 +1,7 @@
 package pantograph
 
 import (
+	"fmt"
 	"math"
 	"math/rand/v2"
 	"testing"
@@ -145,4 +146,14 @@ func TestChooseStylusNearest(t *testing.T) {
 			}
 		}
 	}
+}
+
+func ExampleChooseStylus() {
+	m := Machine{Styli: []Stylus{
+		{Name: "3 mm", Diameter: 3, Tip: TipRound},
+		{Name: "4 mm", Diameter: 4, Tip: TipRound},
+	}}
+	c, _ := ChooseStylus(m, 10, 0.43) // a 0.43 mm cutter at 10:1 wants a 4.3 mm stylus
+	fmt.Printf("%s stylus, δ = %+.3f mm: %s\n", c.Stylus.Name, c.Compensation, c.Direction)
+	// Output: 4 mm stylus, δ = +0.150 mm: the template's outline grows and its openings shrink
 }

@@ -76,47 +76,52 @@ func parseStylus(args []string, stdout, stderr io.Writer) (a stylusArgs, code in
 	units := fl.String("units", "mm", `"mm" or "in"`)
 	fl.BoolVar(&a.json, "json", false, "print JSON")
 	help := fl.BoolP("help", "h", false, "show help")
-	bad := func(format string, v ...any) (stylusArgs, int, bool) {
-		fmt.Fprintf(stderr, "panto stylus: "+format+"\n%sRun 'panto help stylus' for more.\n",
-			append(v, stylusSynopsis)...)
+	err := fl.Parse(args)
+	switch {
+	case err != nil:
+	case *help:
+		return a, runHelp([]string{"stylus"}, stdout, stderr), true
+	case fl.NArg() > 0:
+		err = fmt.Errorf("unexpected argument %q: every value goes with a flag", fl.Arg(0))
+	case *units != "mm" && *units != "in":
+		err = fmt.Errorf(`--units must be "mm" or "in", got %q`, *units)
+	case !fl.Changed("ratio"):
+		err = errors.New("--ratio missing: give the ratio the linkage is set to, e.g. --ratio 10")
+	default:
+		a.hasCutter, a.hasStylus = fl.Changed("cutter"), fl.Changed("stylus")
+		err = a.check()
+	}
+	if err != nil {
+		fmt.Fprintf(stderr, "panto stylus: %v\n%sRun 'panto help stylus' for more.\n", err, stylusSynopsis)
 		return a, exitUsage, true
 	}
-	if err := fl.Parse(args); err != nil {
-		return bad("%v", err)
-	}
-	if *help {
-		return a, runHelp([]string{"stylus"}, stdout, stderr), true
-	}
-	a.hasCutter, a.hasStylus = fl.Changed("cutter"), fl.Changed("stylus")
-	switch {
-	case fl.NArg() > 0:
-		return bad("unexpected argument %q: every value goes with a flag", fl.Arg(0))
-	case *units != "mm" && *units != "in":
-		return bad(`--units must be "mm" or "in", got %q`, *units)
-	case !fl.Changed("ratio"):
-		return bad("--ratio missing: give the ratio the linkage is set to, e.g. --ratio 10")
-	case !(a.ratio >= 1) || math.IsInf(a.ratio, 0):
-		return bad("--ratio is template size : part size and must be at least 1, got %g", a.ratio)
-	case !a.hasCutter && !a.hasStylus:
-		return bad("give --cutter (to find its stylus) or --stylus (to find its cutter), or both")
-	case a.hasCutter && !positive(a.cutter):
-		return bad("--cutter must be a diameter greater than 0, got %g", a.cutter)
-	case a.hasStylus && !positive(a.stylus):
-		return bad("--stylus must be a diameter greater than 0, got %g", a.stylus)
-	case a.machine != "" && !a.hasCutter:
-		return bad("--machine needs --cutter: panto picks the stylus for that cutter from the machine's set")
-	case a.machine != "" && a.hasStylus:
-		return bad("give --stylus or --machine, not both: with --machine panto picks the stylus from the machine's set")
-	}
-	a.inch = *units == "in"
-	if a.inch {
+	if a.inch = *units == "in"; a.inch {
 		a.cutter *= pantograph.MMPerInch
 		a.stylus *= pantograph.MMPerInch
 	}
 	return a, exitOK, false
 }
 
-func positive(v float64) bool { return v > 0 && !math.IsInf(v, 1) }
+// check says what is wrong with a combination of flags, or nil.
+func (a stylusArgs) check() error {
+	switch {
+	case !(a.ratio >= 1) || math.IsInf(a.ratio, 0):
+		return fmt.Errorf("--ratio is template size : part size and must be at least 1, got %g", a.ratio)
+	case !a.hasCutter && !a.hasStylus:
+		return errors.New("give --cutter (to find its stylus) or --stylus (to find its cutter), or both")
+	case a.hasCutter && !isSize(a.cutter):
+		return fmt.Errorf("--cutter must be a diameter greater than 0, got %g", a.cutter)
+	case a.hasStylus && !isSize(a.stylus):
+		return fmt.Errorf("--stylus must be a diameter greater than 0, got %g", a.stylus)
+	case a.machine != "" && !a.hasCutter:
+		return errors.New("--machine needs --cutter: panto picks the stylus for that cutter from the machine's set")
+	case a.machine != "" && a.hasStylus:
+		return errors.New("give --stylus or --machine, not both: with --machine panto picks the stylus from the machine's set")
+	}
+	return nil
+}
+
+func isSize(v float64) bool { return v > 0 && !math.IsInf(v, 1) }
 
 // reportMachineError explains why the machine file could not be read.
 func reportMachineError(err error, stderr io.Writer) int {

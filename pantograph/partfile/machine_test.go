@@ -2,6 +2,7 @@ package partfile
 
 import (
 	"errors"
+	"fmt"
 	"os"
 	"path/filepath"
 	"slices"
@@ -364,4 +365,32 @@ func FuzzReadMachine(f *testing.F) {
 			}
 		}
 	})
+}
+
+func ExampleReadMachine() {
+	src := `name = "bench pantograph"
+units = "mm"
+[ratio]
+min = 2
+max = 10
+[dials.copy_x]
+pitch = 2
+divisions = 100
+[[stylus]]
+name = "4 mm"
+diameter = 4
+`
+	m, err := ReadMachine("bench.machine.toml", []byte(src))
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("%s: ratio %s; copy X %g mm a division; stylus %q\n", m.Name, m.Ratio,
+		m.Dials.CopyX.Pitch/float64(m.Dials.CopyX.Divisions), m.Styli[0].Name)
+
+	_, err = ReadMachine("bench.machine.toml", []byte("[ratio]\nmin = 2\nmax = 10\n[spindle]\nmax_rmp = 15000\n"))
+	fmt.Println(err)
+	// Output:
+	// bench pantograph: ratio 2:1 to 10:1, any value between; copy X 0.02 mm a division; stylus "4 mm"
+	// bench.machine.toml:5: unknown key `max_rmp` in [spindle] — did you mean `max_rpm`?
 }
