@@ -157,3 +157,24 @@ func ExampleChooseStylus() {
 	fmt.Printf("%s stylus, δ = %+.3f mm: %s\n", c.Stylus.Name, c.Compensation, c.Direction)
 	// Output: 4 mm stylus, δ = +0.150 mm: the template's outline grows and its openings shrink
 }
+
+func TestDirectionOf(t *testing.T) {
+	tests := []struct {
+		delta float64
+		want  string
+	}{
+		{0, DirectionNone},
+		{Compensation(3, 0.7, 2.1), DirectionNone}, // derived: 0 but for float rounding (2.0999999999999996)
+		{0.0004, DirectionNone},                     // prints as 0.000 mm: not called a change
+		{-0.0004, DirectionNone},
+		{0.0006, DirectionGrow}, // prints as 0.001 mm
+		{0.35, DirectionGrow},
+		{-0.0006, DirectionShrink},
+		{-0.5, DirectionShrink},
+	}
+	for _, tc := range tests {
+		if got := DirectionOf(tc.delta); got != tc.want {
+			t.Errorf("δ %v: got %q, want %q", tc.delta, got, tc.want)
+		}
+	}
+}
