@@ -165,7 +165,7 @@ func TestDirectionOf(t *testing.T) {
 	}{
 		{0, DirectionNone},
 		{Compensation(3, 0.7, 2.1), DirectionNone}, // derived: 0 but for float rounding (2.0999999999999996)
-		{0.0004, DirectionNone},                     // prints as 0.000 mm: not called a change
+		{0.0004, DirectionNone},                    // prints as 0.000 mm: not called a change
 		{-0.0004, DirectionNone},
 		{0.0006, DirectionGrow}, // prints as 0.001 mm
 		{0.35, DirectionGrow},
