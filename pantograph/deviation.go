@@ -21,6 +21,12 @@ import (
 // above the rounding of geom's exact offsets (about 1e-12 mm).
 const deviationTol = 1e-4
 
+// fitTol is how much less than the cutter's radius the shrinking uses, in mm, so that a cutter
+// exactly as wide as a slot, or as round as a fillet, counts as fitting: such features are
+// drawn to be cut in one pass, and shrinking by the full radius leaves only a line, which is no
+// region. A tenth of a micrometre changes the material reported left by less than that.
+const fitTol = 1e-7
+
 // openingFit checks openings or recesses rs, all cut from inside with a cutter of diameter d.
 // Holes of one milled feature share their fate, so only the first that deviates is described.
 func openingFit(pf PlannedFeature, rs []geom.Region, d float64) (Status, []PlanWarning) {
@@ -44,7 +50,7 @@ func openingFit(pf PlannedFeature, rs []geom.Region, d float64) (Status, []PlanW
 
 // openingFitOne checks one region cut from inside.
 func openingFitOne(pf PlannedFeature, r geom.Region, d float64) (Status, []PlanWarning) {
-	rc := d / 2
+	rc := d/2 - fitTol
 	centre := r.Offset(-rc).Regions
 	if len(centre) == 0 {
 		amount, width := d, "too small"
@@ -67,7 +73,7 @@ func openingFitOne(pf PlannedFeature, r geom.Region, d float64) (Status, []PlanW
 
 // profileFit checks the profile, cut round from outside with a cutter of diameter d.
 func profileFit(pf PlannedFeature, r geom.Region, d float64) (Status, []PlanWarning) {
-	rc := d / 2
+	rc := d/2 - fitTol
 	made := geom.OffsetRegions(r.Offset(rc).Regions, -rc)
 	var ws []PlanWarning
 	if g, ok := r.NarrowestGap(); ok && g.Width < d-deviationTol {

@@ -72,6 +72,9 @@ type PlannedFeature struct {
 	Drill  float64 // mm; the drill for drilled holes, else 0
 	Stylus float64 // mm
 	Tip    Tip
+	// Matched is the stylus diameter that would need no compensation, R × the cutter, mm;
+	// for drilled holes, R × the setup's cutter.
+	Matched float64
 	// Compensation is δ = R·r_c − r_s in template mm; traced edges move by it away from
 	// R × the part (out for the profile, in for openings). 0 for seats and grooves.
 	Compensation float64

@@ -123,8 +123,8 @@ func machineWarnings(p Plan, m *Machine) []PlanWarning {
 	if t := m.CopyTable; t.X > 0 && size.X > t.X+sizeTol || t.Y > 0 && size.Y > t.Y+sizeTol {
 		over := math.Max(size.X-t.X, size.Y-t.Y)
 		ws = append(ws, PlanWarning{Stops: true, Amount: over / p.Ratio, HasAmount: true,
-			Message: fmt.Sprintf("the template is %s x %s mm but the copy table travels only %s x %s mm: choose a smaller ratio",
-				num(size.X), num(size.Y), num(t.X), num(t.Y))})
+			Message: fmt.Sprintf("the template is %s x %s mm but the copy table travels only %s x %s mm: a ratio of about %s:1 or less fits",
+				num(size.X), num(size.Y), num(t.X), num(t.Y), num(fittingRatio(p.Ratio, size, t)))})
 	}
 	if b := m.Printer.Bed; b.X > 0 && b.Y > 0 && !fits(size, b) {
 		ws = append(ws, PlanWarning{Message: fmt.Sprintf(
@@ -188,4 +188,18 @@ func ownsCutter(cs []Cutter, d float64) bool {
 		}
 	}
 	return false
+}
+
+// fittingRatio estimates the largest ratio, to a tenth, at which a template of this size at
+// ratio r would fit travel t: sizes scale with the ratio, all but the compensation, which is a
+// fraction of a millimetre against hundreds.
+func fittingRatio(r float64, size geom.Vec, t Travel) float64 {
+	k := math.Inf(1)
+	if t.X > 0 && size.X > 0 {
+		k = t.X / size.X
+	}
+	if t.Y > 0 && size.Y > 0 {
+		k = math.Min(k, t.Y/size.Y)
+	}
+	return math.Floor(r*k*10) / 10
 }

@@ -51,6 +51,7 @@ func featureName(f Feature) string {
 func (pl planner) tools(pf PlannedFeature, cutter float64) PlannedFeature {
 	pf.Cutter = cutter
 	pf.Stylus, pf.Tip = pl.stylusFor(cutter)
+	pf.Matched = pl.setup.MatchedStylus(cutter)
 	pf.Compensation = compensation(pl.setup.Ratio, cutter, pf.Stylus, pf.Tip)
 	return pf
 }
@@ -127,6 +128,7 @@ func (pl planner) holes(pf PlannedFeature, f Feature) (PlannedFeature, []PlanWar
 	}
 	// The stylus that traces the rest of the job drops into the seats.
 	pf.Stylus, pf.Tip = pl.stylusFor(pl.setup.Cutter)
+	pf.Matched = pl.setup.MatchedStylus(pl.setup.Cutter)
 	pf.Method, pf.Status = Drilled, StatusOK
 	pf.Drill = f.Diameter
 	pf.TemplateBounds = geom.EmptyBox()

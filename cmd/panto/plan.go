@@ -224,10 +224,10 @@ func writeFeature(w io.Writer, f pantograph.PlannedFeature) {
 	fmt.Fprintf(w, "%s  %s\n", no, f.Label)
 	switch f.Method {
 	case pantograph.Drilled:
-		fmt.Fprintf(w, "       drill Ø%s, %s; %s stylus Ø%s in %d seat%s\n", num(f.Drill), f.Depth,
-			f.Tip, num(f.Stylus), len(f.Seats), suffix(len(f.Seats)))
+		fmt.Fprintf(w, "       drill Ø%s, %s; %d seat%s for the %s stylus Ø%s\n", num(f.Drill), f.Depth,
+			len(f.Seats), suffix(len(f.Seats)), f.Tip, num(f.Stylus))
 	case pantograph.Engraved:
-		fmt.Fprintf(w, "       cutter Ø%s, %s deep; %s stylus Ø%s along a channel Ø%s wide\n",
+		fmt.Fprintf(w, "       cutter Ø%s, %s deep; %s stylus Ø%s along a channel %s mm wide\n",
 			num(f.Cutter), f.Depth, f.Tip, num(f.Stylus), num(f.Width))
 	default:
 		fmt.Fprintf(w, "       cutter Ø%s, %s; %s stylus Ø%s; %s\n", num(f.Cutter), depthText(f),
@@ -260,7 +260,7 @@ func depthText(f pantograph.PlannedFeature) string {
 func compensationText(f pantograph.PlannedFeature) string {
 	d := f.Compensation
 	if num(d) == "0" {
-		return "stylus matches the cutter: template edge at exactly R × the part"
+		return "the stylus matches the cutter: no compensation, the template is the part at full ratio"
 	}
 	outline := f.Kind == pantograph.KindProfile
 	grows := d > 0 == outline
@@ -272,12 +272,16 @@ func compensationText(f pantograph.PlannedFeature) string {
 	if grows {
 		verb = "grown"
 	}
-	size := "smaller"
-	if d < 0 {
-		size = "larger"
+	if f.Tip == pantograph.TipPointed {
+		return fmt.Sprintf("a pointed stylus traces with its point, so the template %s is %s by %s mm all round (R × the cutter's radius)",
+			edge, verb, num(abs(d)))
 	}
-	return fmt.Sprintf("stylus %s than matched, so the template %s is %s by %s mm all round",
-		size, edge, verb, num(abs(d)))
+	size := "under"
+	if d < 0 {
+		size = "over"
+	}
+	return fmt.Sprintf("the stylus is %s mm %s the matched Ø%s, so the template %s is %s by %s mm all round",
+		num(abs(f.Stylus-f.Matched)), size, num(f.Matched), edge, verb, num(abs(d)))
 }
 
 // stepText says what one step of the order of work is.
