@@ -3,6 +3,8 @@ package main
 import (
 	"fmt"
 	"io"
+
+	"panto/pantograph/drawing"
 )
 
 const usage = `panto prepares parts for a manual pantograph mill.
@@ -11,6 +13,7 @@ Usage:
   panto check PART [--json] [--min-wall MM]   check a part file and say what limits the cutter
   panto plan PART --ratio R --cutter D [...]  plan the template: sizes, compensation, order of work
   panto stylus --ratio R --cutter D [...]     the stylus for a cutter, or the cutter for a stylus
+  panto import DRAWING [-o PART.toml] [...]   make a part file from a DXF or SVG drawing
   panto help [COMMAND]                        show this help, or a command's help
   panto --version                             show panto's version
 
@@ -104,6 +107,8 @@ func runHelp(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stdout, planUsage)
 	case args[0] == "stylus":
 		fmt.Fprint(stdout, stylusUsage)
+	case args[0] == "import":
+		fmt.Fprintf(stdout, importUsage, drawing.DefaultHoleMaxMM)
 	default:
 		fmt.Fprintf(stderr, "panto: no help for %q: there is no such command\n", args[0])
 		return exitUsage

@@ -39,6 +39,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return runPlan(rest, stdout, stderr)
 	case "stylus":
 		return runStylus(rest, stdout, stderr)
+	case "import":
+		return runImport(rest, stdout, stderr)
 	default:
 		fmt.Fprintf(stderr, "panto: unknown command %q\nRun 'panto help' to see the commands.\n", cmd)
 		return exitUsage

@@ -1,0 +1,217 @@
+package main
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"io"
+	"io/fs"
+	"os"
+	"path/filepath"
+	"strings"
+
+	"github.com/spf13/pflag"
+
+	"panto/export/parttoml"
+	"panto/pantograph"
+	"panto/pantograph/drawing"
+	"panto/pantograph/partfile"
+)
+
+// importFlags are the options of `panto import`.
+type importFlags struct {
+	out     string
+	units   string
+	holeMax float64
+	layers  []string
+	join    float64
+	force   bool
+	help    bool
+}
+
+const importSynopsis = "panto import DRAWING.dxf|DRAWING.svg [-o PART.toml] [--units mm|in] [--hole-max D] [--layer NAME=KIND[:DEPTH]]... [--force]"
+
+// runImport is `panto import DRAWING`: read a DXF or SVG drawing, say what became what, and
+// write a part file.
+func runImport(args []string, stdout, stderr io.Writer) int {
+	var o importFlags
+	fl := pflag.NewFlagSet("import", pflag.ContinueOnError)
+	fl.SetOutput(io.Discard)
+	fl.StringVarP(&o.out, "output", "o", "", "the part file to write (default: the drawing's name with .toml)")
+	fl.StringVar(&o.units, "units", "", "the drawing's units, mm or in, when the file does not say or says wrong")
+	fl.Float64Var(&o.holeMax, "hole-max", 0, "circles this diameter or smaller become drilled holes (drawing units)")
+	fl.StringArrayVar(&o.layers, "layer", nil, "NAME=KIND[:DEPTH]: what a layer's outlines are")
+	fl.Float64Var(&o.join, "join", 0, "join ends this close, in mm (default 0.001)")
+	fl.BoolVar(&o.force, "force", false, "overwrite the part file if it exists")
+	fl.BoolVarP(&o.help, "help", "h", false, "show help")
+	if err := fl.Parse(args); err != nil {
+		fmt.Fprintf(stderr, "panto import: %v\nRun 'panto help import' for usage.\n", err)
+		return exitUsage
+	}
+	if o.help {
+		return runHelp([]string{"import"}, stdout, stderr)
+	}
+	if fl.NArg() != 1 {
+		fmt.Fprintf(stderr, "panto import: give exactly one drawing, got %d\nUsage: %s\n", fl.NArg(), importSynopsis)
+		return exitUsage
+	}
+	opts, err := o.options()
+	if err != nil {
+		fmt.Fprintf(stderr, "panto import: %v\n", err)
+		return exitUsage
+	}
+	return importDrawing(fl.Arg(0), o, opts, stdout, stderr)
+}
+
+// options turns the flags into drawing options.
+func (o importFlags) options() (drawing.Options, error) {
+	opts := drawing.Options{HoleMax: o.holeMax, JoinTol: o.join, Layers: map[string]drawing.LayerRule{}}
+	switch pantograph.Units(o.units) {
+	case "", pantograph.MM, pantograph.Inch:
+		opts.Units = pantograph.Units(o.units)
+	default:
+		return opts, fmt.Errorf("--units must be mm or in, got %q", o.units)
+	}
+	if !(o.join >= 0 && o.join <= 1) {
+		return opts, fmt.Errorf("--join must be between 0 and 1 mm, got %g", o.join)
+	}
+	if o.holeMax < 0 || o.holeMax != o.holeMax {
+		return opts, fmt.Errorf("--hole-max must be 0 or more, got %g", o.holeMax)
+	}
+	for _, l := range o.layers {
+		name, rule, err := drawing.ParseLayerRule(l)
+		if err != nil {
+			return opts, fmt.Errorf("--layer %v", err)
+		}
+		opts.Layers[name] = rule
+	}
+	return opts, nil
+}
+
+// importDrawing reads the drawing, prints the report and writes the part file.
+func importDrawing(path string, o importFlags, opts drawing.Options, stdout, stderr io.Writer) int {
+	if !drawing.IsDrawing(path) {
+		fmt.Fprintf(stderr, "panto import: %s: give a .dxf or .svg drawing\n", path)
+		return exitUsage
+	}
+	out := o.out
+	if out == "" {
+		out = strings.TrimSuffix(path, filepath.Ext(path)) + ".toml"
+	}
+	if _, err := os.Stat(out); err == nil && !o.force {
+		fmt.Fprintf(stderr, "panto import: %s already exists; give --force to overwrite it, or -o another name\n", out)
+		return exitUsage
+	}
+	part, rep, err := drawing.ReadFile(path, opts)
+	if err != nil {
+		return reportDrawingError(err, stderr)
+	}
+	rep.WriteTo(stdout)
+	var buf bytes.Buffer
+	enc := parttoml.Encoder{Header: importHeader(path, rep)}
+	if err := enc.Encode(&buf, part); err != nil {
+		fmt.Fprintf(stderr, "panto import: %v\n", err)
+		return exitFailed
+	}
+	if _, err := partfile.Read(out, buf.Bytes()); err != nil {
+		// The writer and reader disagree: a bug, not the user's fault. Say so plainly.
+		fmt.Fprintf(stderr, "panto import: the part file written does not read back (%v); please report this\n", err)
+		return exitFailed
+	}
+	if err := writeFileAtomic(out, buf.Bytes()); err != nil {
+		fmt.Fprintf(stderr, "panto import: %v\n", err)
+		return exitFailed
+	}
+	fmt.Fprintf(stdout, "wrote %s; check it with: panto check %s\n", out, out)
+	return exitOK
+}
+
+// importHeader is the comment at the top of an imported part file.
+func importHeader(path string, rep drawing.Report) []string {
+	h := []string{"Part file made by panto import from " + filepath.Base(path) + ".",
+		"Units: " + rep.UnitsNote + ".",
+		"Check names, depths and the stock before use; 'panto check' reads this file."}
+	for _, w := range rep.Warnings {
+		h = append(h, "Warning: "+strings.ReplaceAll(w, "\n", " "))
+	}
+	return h
+}
+
+// reportDrawingError explains why a drawing could not be read.
+func reportDrawingError(err error, stderr io.Writer) int {
+	var pe *fs.PathError
+	if errors.As(err, &pe) {
+		fmt.Fprintf(stderr, "panto import: cannot read the drawing: %v\n", err)
+		return exitUsage
+	}
+	fmt.Fprintln(stderr, err)
+	return exitUsage
+}
+
+// writeFileAtomic writes data to a temporary file beside path and renames it into place, so
+// an interrupted run leaves either the old file or the whole new one.
+func writeFileAtomic(path string, data []byte) error {
+	tmp, err := os.CreateTemp(filepath.Dir(path), "."+filepath.Base(path)+".*.tmp")
+	if err != nil {
+		return err
+	}
+	_, err = tmp.Write(data)
+	if cerr := tmp.Close(); err == nil {
+		err = cerr
+	}
+	if err == nil {
+		err = os.Rename(tmp.Name(), path)
+	}
+	if err != nil {
+		os.Remove(tmp.Name())
+	}
+	return err
+}
+
+// readPartOrDrawing reads a part file, or a DXF or SVG drawing with the default import
+// options (its report going to stderr), so that commands taking a part accept a drawing too.
+func readPartOrDrawing(path string, stderr io.Writer) (pantograph.Part, error) {
+	if !drawing.IsDrawing(path) {
+		return partfile.ReadFile(path)
+	}
+	part, rep, err := drawing.ReadFile(path, drawing.Options{})
+	if err == nil {
+		rep.WriteTo(stderr)
+	}
+	return part, err
+}
+
+const importUsage = `Usage: ` + importSynopsis + `
+
+Reads a DXF (ASCII, R12 or later) or SVG drawing of the part, says what became what, and
+writes a part file you can read and edit. The largest closed outline is the profile; closed
+outlines inside it are cut-outs; circles of --hole-max or less are drilled holes, one [[holes]]
+table per diameter. Loose lines and arcs are joined end to end when their ends are within
+--join; an outline that still does not close is an error that lists where every loose end is.
+Text, dimensions and hatching are not read; the report counts them.
+
+Units: DXF files say theirs in $INSUNITS (inches and millimetres are kept; feet, cm and m
+are converted to mm). SVG sizes come from width, height and viewBox; a file sized in px or
+not at all is read at 96 px per inch with a warning. --units says what the drawing is in when
+the file is silent (for SVG: what one user unit is).
+
+Ellipses, splines and Bézier curves are cut into straight chords within 0.001 mm; circular
+arcs stay arcs. SVG's y axis points down; the part file's points up.
+
+Flags:
+  -o, --output FILE       the part file (default: the drawing's name with .toml)
+  --units mm|in           the drawing's units, overriding the file
+  --hole-max D            largest circle that becomes a drilled hole, in the drawing's units
+                          (default %g mm); 0 keeps the default
+  --layer NAME=KIND[:DEPTH]
+                          what the outlines on layer NAME are (a DXF layer, or the id or label
+                          of an SVG group): profile, cutout, pocket, holes, groove (open lines
+                          to engrave) or ignore; DEPTH in the drawing's units, e.g.
+                          --layer RECESS=pocket:0.3  --layer CENTRES=ignore
+  --join MM               join ends this close together (default 0.001 mm)
+  --force                 overwrite the part file if it exists
+  -h, --help              show this help
+
+Exit codes: 0 written, 1 the file could not be written, 2 bad flags or a bad drawing
+(the message names the file, the line and what is wrong).
+`
