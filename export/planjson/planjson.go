@@ -48,10 +48,12 @@ type featureJSON struct {
 	Cutter         *float64     `json:"cutter"`
 	Drill          *float64     `json:"drill,omitempty"`
 	Stylus         float64      `json:"stylus"`
+	Matched        float64      `json:"matched_stylus"`
 	Tip            string       `json:"tip"`
 	Compensation   float64      `json:"compensation"`
 	Status         string       `json:"status"`
-	Depth          string       `json:"depth"`
+	Through        bool         `json:"through"`
+	Depth          *float64     `json:"depth"`
 	TemplateArea   *float64     `json:"template_area,omitempty"`
 	TemplateBounds *boundsJSON  `json:"template_bounds,omitempty"`
 	Seats          [][2]float64 `json:"seats,omitempty"`
@@ -135,13 +137,16 @@ func Encode(w io.Writer, p pantograph.Plan) error {
 }
 
 // feature is the JSON view of one planned feature; fields that do not apply to its method
-// are left out (cutter is null for drilled holes).
+// are left out (cutter is null for drilled holes, depth is null for through features).
 func feature(f pantograph.PlannedFeature) featureJSON {
 	fj := featureJSON{Name: f.Name, Kind: string(f.Kind), Number: f.Number, Method: string(f.Method),
 		Stylus: round(f.Stylus), Tip: string(f.Tip), Compensation: round(f.Compensation),
-		Status: string(f.Status), Depth: f.Depth.String()}
-	if f.Kind == pantograph.KindProfile || f.Kind == pantograph.KindCutout {
-		fj.Depth = "through"
+		Status: string(f.Status), Matched: round(f.Matched)}
+	switch {
+	case f.Depth.Through, f.Kind == pantograph.KindProfile, f.Kind == pantograph.KindCutout:
+		fj.Through = true
+	default:
+		fj.Depth = ptr(f.Depth.MM)
 	}
 	if f.Cutter > 0 {
 		fj.Cutter = ptr(f.Cutter)
