@@ -75,8 +75,8 @@ func TestPlanAgainstMachine(t *testing.T) {
 		{"copy table too small", func(m *Machine, _ *Setup) { m.CopyTable = Travel{X: 150, Y: 150} }, "copy table travels only 150 x 150", true},
 		{"bed too small", func(m *Machine, _ *Setup) { m.Printer.Bed = Travel{X: 120, Y: 180} }, "larger than the printer bed", false},
 		{"bed fits turned", func(m *Machine, _ *Setup) { m.Printer.Bed = Travel{X: 100, Y: 210} }, "no drill of Ø2", false},
-		{"stylus not owned", func(_ *Machine, s *Setup) { s.Stylus = 5 }, "wants a Ø5 stylus", false},
-		{"cutter not owned", func(_ *Machine, s *Setup) { s.Cutter = 0.3 }, "wants a Ø0.3 cutter", false},
+		{"stylus not owned", func(_ *Machine, s *Setup) { s.Stylus = 5 }, "uses a Ø5 stylus", false},
+		{"cutter not owned", func(_ *Machine, s *Setup) { s.Cutter = 0.3 }, "uses a Ø0.3 cutter", false},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
@@ -119,6 +119,15 @@ func TestMachineChoices(t *testing.T) {
 	}
 	if pins := planned(t, p, "pins"); pins.Method != Drilled || pins.Drill != 0.8 {
 		t.Errorf("pins got %v drill %v, want drilled with 0.8", pins.Method, pins.Drill)
+	}
+	// A 0.4 mm hole is smaller than the 0.5 mm cutter, so it stays drilled and the plan says
+	// which drill is nearest (derived: 0.8 − 0.4 = 0.4).
+	p, err = PlanPart(plate(holes("tiny", 0.4, through, geom.V(5, 5))), Setup{Ratio: 10, Cutter: 0.5}, &m)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if tiny := planned(t, p, "tiny"); tiny.Method != Drilled || !hasWarning(p, "tiny", 0.4) {
+		t.Errorf("tiny got %v with warnings %v, want drilled and a warning of 0.4 mm", tiny.Method, p.Warnings)
 	}
 }
 

@@ -149,22 +149,25 @@ func ratioWarning(r float64, rr RatioRange) (PlanWarning, bool) {
 		num(r), rr)}, true
 }
 
-// toolWarnings reports a stylus or cutter the plan uses that the machine file does not list.
-// Drills are checked with each holes feature, where a missing drill changes the plan.
+// toolWarnings reports a stylus or cutter the plan uses that the machine file does not list,
+// once for the whole plan. Drills are checked with each holes feature, where a missing drill
+// changes the plan.
 func toolWarnings(p Plan, m *Machine) []PlanWarning {
 	var ws []PlanWarning
-	seen := map[float64]bool{}
+	styli, cutters := map[float64]bool{}, map[float64]bool{}
 	for _, f := range p.Features {
 		if f.Status == StatusLost {
 			continue
 		}
-		if len(m.Styli) > 0 && !seen[-f.Stylus] && !ownsStylus(m.Styli, f.Stylus) {
-			seen[-f.Stylus] = true
-			ws = append(ws, warnf(f, "the plan wants a Ø%s stylus, and the machine file lists none that size", num(f.Stylus)))
+		if len(m.Styli) > 0 && !styli[f.Stylus] && !ownsStylus(m.Styli, f.Stylus) {
+			styli[f.Stylus] = true
+			ws = append(ws, PlanWarning{Message: fmt.Sprintf(
+				"the plan uses a Ø%s stylus, and the machine file lists none that size", num(f.Stylus))})
 		}
-		if f.Cutter > 0 && len(m.Cutters) > 0 && !seen[f.Cutter] && !ownsCutter(m.Cutters, f.Cutter) {
-			seen[f.Cutter] = true
-			ws = append(ws, warnf(f, "the plan wants a Ø%s cutter, and the machine file lists none that size", num(f.Cutter)))
+		if f.Cutter > 0 && len(m.Cutters) > 0 && !cutters[f.Cutter] && !ownsCutter(m.Cutters, f.Cutter) {
+			cutters[f.Cutter] = true
+			ws = append(ws, PlanWarning{Message: fmt.Sprintf(
+				"the plan uses a Ø%s cutter, and the machine file lists none that size", num(f.Cutter))})
 		}
 	}
 	return ws

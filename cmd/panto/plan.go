@@ -378,7 +378,9 @@ Flags:
                          template {bounds {min, max}}             template mm
                          features [{name, kind, number, method, cutter, drill, stylus, tip,
                                     compensation (δ, template mm), status (ok, deviates,
-                                    lost), depth, template_area (mm², traced features),
+                                    lost), matched_stylus (R × cutter), through,
+                                    depth (mm, null when through), template_area (mm²,
+                                    traced features),
                                     template_bounds, seats [[x, y]] (drilled holes),
                                     path, width (grooves)}]
                          order [feature names in working order]
