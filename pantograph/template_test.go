@@ -2,6 +2,7 @@ package pantograph
 
 import (
 	"math"
+	"math/rand/v2"
 	"testing"
 
 	"panto/geom"
@@ -199,4 +200,47 @@ func hasWarning(p Plan, feature string, amount float64) bool {
 		}
 	}
 	return false
+}
+
+func TestCompensatedOpeningsProperty(t *testing.T) {
+	for seed := uint64(0); seed < 200; seed++ {
+		rng := rand.New(rand.NewPCG(seed, 1))
+		r := 2 + 18*rng.Float64()
+		cutter := 0.1 + 0.5*rng.Float64()
+		stylus := r * cutter * (0.6 + 0.8*rng.Float64())
+		w, h := 2+6*rng.Float64(), 2+4*rng.Float64()
+		rho := cutter/2 + rng.Float64()*math.Min(w, h)/4 // corners the cutter makes as drawn
+		f := rectFeature(KindPocket, "recess", geom.V(1, 1), geom.V(w, h), rho, Depth{MM: 0.2})
+		part := plate(f)
+		part.Profile = rectFeature(KindProfile, "", geom.V(0, 0), geom.V(w+2, h+2), 0, Depth{})
+		p, err := PlanPart(part, Setup{Ratio: r, Cutter: cutter, Stylus: stylus}, nil)
+		if err != nil {
+			t.Fatalf("seed %d: %v", seed, err)
+		}
+		pf := planned(t, p, "recess")
+		d := r*cutter/2 - stylus/2
+		// derived: a rounded rectangle moved in by δ keeps its centres: sides shrink by 2δ,
+		// corner radii by δ.
+		rr := r*rho - d
+		want := (r*w-2*d)*(r*h-2*d) - (4-math.Pi)*rr*rr
+		if pf.Status != StatusOK || !near(pf.TemplateArea, want, 1e-9*want) {
+			t.Fatalf("seed %d: status %v, template area got %v, want %v", seed, pf.Status, pf.TemplateArea, want)
+		}
+	}
+}
+
+func BenchmarkPlanHolePlate(b *testing.B) {
+	var at []geom.Vec
+	for i := 0; i < 15; i++ {
+		for j := 0; j < 6; j++ {
+			at = append(at, geom.V(1+float64(i)*1.25, 1.5+float64(j)*1.4))
+		}
+	}
+	part := plate(holes("grid", 0.5, through, at...), holes("milled", 0.7, through, geom.V(19.3, 9.3)))
+	s := Setup{Ratio: 10, Cutter: 0.3, Stylus: 2.5, MillHoles: true}
+	for b.Loop() {
+		if _, err := PlanPart(part, s, nil); err != nil {
+			b.Fatal(err)
+		}
+	}
 }
