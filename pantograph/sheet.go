@@ -65,6 +65,7 @@ type SheetRow struct {
 	Stylus  string // "stylus Ø5 mm round" or "" for the datum
 	Where   *Position
 	Depth   float64 // mm below the top face at the last pass; 0 for the datum
+	Through bool    // the cut goes through the stock
 	// Passes are the depths of each pass or peck with their depth-dial readings; only on the
 	// first row of a feature, later holes repeat them.
 	Passes    []Pass

@@ -2,6 +2,7 @@ package pantograph
 
 import (
 	"fmt"
+	"math"
 
 	"panto/geom"
 )
@@ -41,7 +42,7 @@ func (b sheetBuilder) drillRows(st Step) []SheetRow {
 	if d == 0 {
 		d = f.Drill
 	}
-	total := TotalDepth(f.Depth, b.p.Stock.Thickness, ToolDrill, d)
+	total := b.settable(TotalDepth(f.Depth, b.p.Stock.Thickness, ToolDrill, d), f.Depth.Through)
 	seats := st.Seats
 	if len(seats) == 0 {
 		seats = f.Seats
@@ -49,7 +50,7 @@ func (b sheetBuilder) drillRows(st Step) []SheetRow {
 	var out []SheetRow
 	for i, seat := range seats {
 		r := SheetRow{Number: f.Number, Feature: f.Name, What: StepDrill, Tool: b.toolText(f),
-			Stylus: stylusText(f), Where: b.at(seat), Depth: total,
+			Stylus: stylusText(f), Where: b.at(seat), Depth: total, Through: f.Depth.Through,
 			Action: fmt.Sprintf("drill hole %d of %d", i+1, len(seats))}
 		if i == 0 {
 			r.Passes, r.PassRule = passes(Pecks(total, d)), PeckRule(d)
@@ -76,10 +77,10 @@ func (b sheetBuilder) traceRow(st Step) SheetRow {
 	if f.Kind == KindProfile || f.Kind == KindCutout {
 		dep = Depth{Through: true}
 	}
-	total := TotalDepth(dep, b.p.Stock.Thickness, kind, f.Cutter)
+	total := b.settable(TotalDepth(dep, b.p.Stock.Thickness, kind, f.Cutter), dep.Through)
 	rule := MillPassRule(kind, f.Cutter, b.p.Stock.Material)
 	r := SheetRow{Number: f.Number, Feature: f.Name, What: st.What, Tool: b.toolText(f),
-		Stylus: stylusText(f), Where: b.at(startOf(f)), Depth: total, Action: action,
+		Stylus: stylusText(f), Where: b.at(startOf(f)), Depth: total, Through: dep.Through, Action: action,
 		Passes: passes(Passes(total, rule.StepDown)), PassRule: rule.Rule}
 	b.speed(&r, f.Cutter, false)
 	return r
@@ -95,6 +96,18 @@ func startOf(f PlannedFeature) geom.Vec {
 		return f.TemplateRegions[0].Outer[0].A
 	}
 	return f.TemplateBounds.Min
+}
+
+// settable returns the depth of a through cut taken down to the next whole division of the
+// depth dial, so the last pass can be set: going a fraction of a division deeper through the
+// stock does no harm. A blind depth is kept as drawn, and so is any depth without a dial.
+func (b sheetBuilder) settable(total float64, through bool) float64 {
+	d := b.m.Dials.Depth
+	if !through || !d.Stated() {
+		return total
+	}
+	div := d.Division() * d.unitMM()
+	return math.Ceil(total/div-divisionSnap) * div
 }
 
 // passes turns depths into passes; their readings are filled in later.
@@ -162,7 +175,12 @@ func (b sheetBuilder) readAxis(a axis, rows []SheetRow) DialInfo {
 	for _, r := range rows {
 		counts = append(counts, a.dial.Count(a.get(r.Where)))
 	}
-	info.DatumTurns = a.dial.DatumTurns(counts)
+	// Every reading, and every wind-back below one (the datum's own included), stays positive.
+	lows := []float64{-a.dial.BackOff()}
+	for _, c := range counts {
+		lows = append(lows, c-a.dial.BackOff())
+	}
+	info.DatumTurns = a.dial.DatumTurns(lows)
 	shift := float64(info.DatumTurns) * a.dial.Pitch
 	for i := range counts {
 		counts[i] += shift
@@ -185,12 +203,33 @@ func (b sheetBuilder) readDepth(rows []SheetRow) DialInfo {
 	if !info.Stated {
 		return info
 	}
-	for _, r := range rows {
-		for j := range r.Passes {
-			r.Passes[j].Reading = d.Read(d.Count(r.Passes[j].Depth), 1)
+	for i := range rows {
+		ps := snapPasses(rows[i].Passes, d)
+		for j := range ps {
+			ps[j].Reading = d.Read(d.Count(ps[j].Depth), 1)
 		}
+		rows[i].Passes = ps
 	}
 	return info
+}
+
+// snapPasses moves every pass but the last to a whole division of the depth dial, no deeper
+// than planned, so each can be set; the last stays at the row's depth (see settable). A pass
+// that would then go no deeper than the one before is dropped.
+func snapPasses(ps []Pass, d Dial) []Pass {
+	div := d.Division() * d.unitMM()
+	var out []Pass
+	last := 0.0
+	for i, p := range ps {
+		if i < len(ps)-1 {
+			p.Depth = math.Floor(p.Depth/div+divisionSnap) * div
+		}
+		if p.Depth > last+divisionSnap*div || i == len(ps)-1 {
+			out = append(out, p)
+			last = p.Depth
+		}
+	}
+	return out
 }
 
 // dialInfo describes a dial for the sheet's header.

@@ -41,10 +41,14 @@ func TestBuildSheetRows(t *testing.T) {
 	if len(s.Rows) != 4 {
 		t.Fatalf("got %d rows, want 4 (datum, 2 holes, pocket)", len(s.Rows))
 	}
-	// The pocket starts at template X = −20: derived DatumTurns = ⌈20/2⌉ = 10, so the datum
-	// reads 10 t 0 div and the pocket's start 0 t 0 div.
-	if got := s.Dials[0].DatumTurns; got != 10 {
-		t.Errorf("copy X datum turns: got %v, want 10", got)
+	// The pocket starts at template X = −20 and may be wound back 0.5 mm (a quarter turn) below
+	// that: derived DatumTurns = ⌈20.5/2⌉ = 11, so the datum reads 11 t 0 div and the pocket's
+	// start 1 t 0 div. Copy Y: the datum's own wind-back, 0.5 mm below 0: 1 turn. Work X (1 mm
+	// screw, wind-back 13 div = 0.26 mm): −2 part mm − 0.26 needs 3 turns.
+	for i, want := range []int{11, 1, 3, 1} {
+		if got := s.Dials[i].DatumTurns; got != want {
+			t.Errorf("%s datum turns: got %v, want %v", s.Dials[i].Name, got, want)
+		}
 	}
 	tests := []struct {
 		row        int
@@ -56,15 +60,14 @@ func TestBuildSheetRows(t *testing.T) {
 		feature    string
 		firstDepth float64
 	}{
-		// derived: 20 + 60 = 80 mm = 40 t; Y 20 mm = 10 t; work X 6 mm + 2 mm (20 template
-		// mm shift is 2 part mm, but the work dial has its own datum: −2 part mm needs 2 turns
-		// of 1 mm) = 8 mm = 8 t. Pecks (derived): 0.3, then every 0.15 to 1.35 (8), then the
+		// derived: 22 + 60 = 82 mm = 41 t; Y 2 + 20 = 22 mm = 11 t; work X 3 + 6 = 9 t. Pecks (derived): 0.3, then every 0.15 to 1.35 (8), then the
 		// full 1.43024 (through 1.2 + point 0.18 + 0.05): 9.
-		{1, "40 t 0 div", "10 t 0 div", "8 t 0 div", 0, 9, "pins", 0.3},
-		// derived: 20 + 40 = 60 mm = 30 t, behind 80: a reversal on copy X and work X.
-		{2, "30 t 0 div", "10 t 0 div", "6 t 0 div", 2, 0, "pins", 0},
-		// derived: 0 mm = 0 t; 30 mm = 15 t; work X 0 t; behind the hole: reversal on X again.
-		{3, "0 t 0 div", "15 t 0 div", "0 t 0 div", 2, 3, "recess", 0.1},
+		{1, "41 t 0 div", "11 t 0 div", "9 t 0 div", 0, 9, "pins", 0.3},
+		// derived: 22 + 40 = 62 mm = 31 t, behind 82: a reversal on copy X and work X.
+		{2, "31 t 0 div", "11 t 0 div", "7 t 0 div", 2, 0, "pins", 0},
+		// derived: 22 − 20 = 2 mm = 1 t; 2 + 30 = 32 mm = 16 t; work X 3 − 2 = 1 t; behind the
+		// hole: a reversal on both X dials again.
+		{3, "1 t 0 div", "16 t 0 div", "1 t 0 div", 2, 3, "recess", 0.1},
 	}
 	for _, tc := range tests {
 		r := s.Rows[tc.row]
@@ -103,10 +106,16 @@ func TestBuildSheetSpeedsAndDepth(t *testing.T) {
 	if math.Abs(hole.Feed-15) > 1e-9 {
 		t.Errorf("drill feed: got %v, want 15", hole.Feed)
 	}
-	// derived: through 1.2 + 0.3004·0.6 + 0.05 = 1.43024 mm; last peck reads 1 t 43 div +0.02.
+	// derived: through 1.2 + 0.3004·0.6 + 0.05 = 1.43024 mm, taken to the next whole division
+	// of the 0.01 mm depth dial: 1.44 mm, 1 t 44 div.
 	last := hole.Passes[len(hole.Passes)-1]
-	if math.Abs(last.Depth-1.43024) > 1e-9 || last.Reading.Turns != 1 || last.Reading.Divisions != 43 {
-		t.Errorf("last peck: got %v at %v, want 1.43024 at 1 t 43 div", last.Depth, last.Reading)
+	if math.Abs(last.Depth-1.44) > 1e-9 || last.Reading.String() != "1 t 44 div" {
+		t.Errorf("last peck: got %v at %v, want 1.44 at 1 t 44 div", last.Depth, last.Reading)
+	}
+	for _, p := range hole.Passes {
+		if p.Reading.Remainder != 0 {
+			t.Errorf("peck at %v is between divisions: %v", p.Depth, p.Reading)
+		}
 	}
 	if len(s.Cautions) == 0 || len(s.Notes) == 0 {
 		t.Errorf("the sheet has no cautions or notes")
@@ -123,5 +132,29 @@ func TestBuildSheetNoDials(t *testing.T) {
 	// positions are still there in mm: the second hole is 40 mm on the template, 4 at the part
 	if w := s.Rows[2].Where; w.Template.X != 40 || math.Abs(w.Part.X-4) > 1e-12 {
 		t.Errorf("got %v / %v, want 40 / 4", w.Template.X, w.Part.X)
+	}
+}
+
+func TestSnapPasses(t *testing.T) {
+	d := Dial{Pitch: 1, Divisions: 50} // 0.02 mm a division
+	tests := []struct {
+		name string
+		in   []float64
+		want []float64
+	}{
+		// derived: each pass but the last down to a whole 0.02 mm
+		{"eighths", []float64{0.125, 0.25, 0.375, 0.5}, []float64{0.12, 0.24, 0.36, 0.5}},
+		// derived: 0.01 → 0 is no cut and is dropped; 0.02 stays; 0.03 → 0.02 repeats and goes
+		{"finer than a division", []float64{0.01, 0.02, 0.03, 0.04}, []float64{0.02, 0.04}},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			got := snapPasses(passes(tc.in), d)
+			var depths []float64
+			for _, p := range got {
+				depths = append(depths, p.Depth)
+			}
+			approxSlice(t, depths, tc.want, 1e-12)
+		})
 	}
 }
