@@ -84,6 +84,12 @@ func TestLostNeedsAcceptance(t *testing.T) {
 		if got := p.Lost(); len(got) != 1 || got[0] != "narrow" {
 			t.Errorf("accept %v: Lost got %v, want [narrow]", accept, got)
 		}
+		// derived: with a matched stylus the template is the 200 × 100 plate; the lost slot
+		// adds nothing to it.
+		if !planned(t, p, "narrow").TemplateBounds.IsEmpty() || p.Bounds.Min != geom.V(0, 0) || p.Bounds.Max != geom.V(200, 100) {
+			t.Errorf("accept %v: bounds got %v (slot %v), want (0, 0)–(200, 100) and none for the slot",
+				accept, p.Bounds, planned(t, p, "narrow").TemplateBounds)
+		}
 		for _, name := range p.Order {
 			if name == "narrow" {
 				t.Errorf("accept %v: a lost feature is in the order of work %v", accept, p.Order)

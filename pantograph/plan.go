@@ -30,7 +30,9 @@ type Plan struct {
 	// Mirror, then Rotate, then Scale(Ratio).
 	Transform geom.Transform
 
-	// Bounds holds everything on the template: traced regions, seats and groove channels.
+	// Bounds holds everything on the template: traced regions, seats (with room for the
+	// stylus) and groove channels. The datum seat, at the origin, is inside it only when the
+	// datum lies on the part; writers that cut a seat there must allow for it.
 	Bounds geom.Box
 
 	Features []PlannedFeature // the profile first, then the part's features in file order
@@ -196,7 +198,7 @@ func PlanPart(p Part, s Setup, m *Machine) (Plan, error) {
 		out.Features = append(out.Features, pf)
 		out.Warnings = append(out.Warnings, ws...)
 	}
-	out.Bounds = geom.EmptyBox().AddPoint(geom.Vec{})
+	out.Bounds = geom.EmptyBox()
 	for _, f := range out.Features {
 		if !f.TemplateBounds.IsEmpty() {
 			out.Bounds = out.Bounds.Union(f.TemplateBounds)

@@ -25,7 +25,8 @@ type planner struct {
 
 // plan returns the template of one feature with its status and warnings.
 func (pl planner) plan(f Feature) (PlannedFeature, []PlanWarning) {
-	pf := PlannedFeature{Name: featureName(f), Label: f.Label(), Kind: f.Kind, Depth: f.Depth}
+	pf := PlannedFeature{Name: featureName(f), Label: f.Label(), Kind: f.Kind, Depth: f.Depth,
+		TemplateBounds: geom.EmptyBox()}
 	switch f.Kind {
 	case KindProfile:
 		return pl.traced(pf, []geom.Region{f.Region}, false)

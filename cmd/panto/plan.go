@@ -229,13 +229,15 @@ func writeFeature(w io.Writer, f pantograph.PlannedFeature) {
 	case pantograph.Engraved:
 		fmt.Fprintf(w, "       cutter Ø%s, %s deep; %s stylus Ø%s along a channel %s mm wide\n",
 			num(f.Cutter), f.Depth, f.Tip, num(f.Stylus), num(f.Width))
-	default:
+	case pantograph.Traced:
+		if f.Status == pantograph.StatusLost {
+			fmt.Fprintf(w, "       cutter Ø%s, %s; not on the template\n", num(f.Cutter), depthText(f))
+			break
+		}
 		fmt.Fprintf(w, "       cutter Ø%s, %s; %s stylus Ø%s; %s\n", num(f.Cutter), depthText(f),
 			f.Tip, num(f.Stylus), compensationText(f))
-		if f.Status != pantograph.StatusLost {
-			b := f.TemplateBounds.Size()
-			fmt.Fprintf(w, "       template %s x %s mm, area %s mm²\n", num(b.X), num(b.Y), num(f.TemplateArea))
-		}
+		b := f.TemplateBounds.Size()
+		fmt.Fprintf(w, "       template %s x %s mm, area %s mm²\n", num(b.X), num(b.Y), num(f.TemplateArea))
 	}
 	switch f.Status {
 	case pantograph.StatusDeviates:
