@@ -154,3 +154,15 @@ func ExamplePlanPart() {
 	// 1 pins: drilled, stylus Ø4, δ +0.0 mm, template 144 x 4 mm
 	// order: [pins profile]
 }
+
+func TestPartWarningsCarryOver(t *testing.T) {
+	// A 1 mm hole centred 0.55 mm from the edge leaves a 0.05 mm wall (derived), thinner than
+	// DefaultMinWall: Check warns, and the plan carries the warning under the feature's name.
+	p := mustPlan(t, plate(holes("edge", 1, through, geom.V(0.55, 5))), Setup{Ratio: 10, Cutter: 0.5})
+	for _, w := range p.Warnings {
+		if w.Feature == "edge" && w.Label == `[[holes]] "edge"` {
+			return
+		}
+	}
+	t.Fatalf("got warnings %v, want the thin wall of \"edge\"", p.Warnings)
+}
