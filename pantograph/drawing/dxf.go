@@ -146,7 +146,7 @@ func (f *dxfFile) header(file string, gs []dxfGroup) error {
 		if err != nil {
 			return &Error{File: file, Line: gs[i+1].line, What: "$INSUNITS", Msg: fmt.Sprintf("expected a whole number, got %q", clip(gs[i+1].val))}
 		}
-		f.insunits, f.insunitLine = n, gs[i+1].line
+		f.insunits, f.insunitLine = n, gs[i+1].line+1
 	}
 	return nil
 }

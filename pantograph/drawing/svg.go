@@ -111,6 +111,9 @@ var notDrawn = map[string]bool{"defs": true, "symbol": true, "clipPath": true, "
 
 // start handles an element below the root.
 func (r *svgReader) start(t xml.StartElement, line int) error {
+	if len(r.stack) == 0 {
+		return &Error{File: r.file, Line: line, What: "<" + t.Name.Local + ">", Msg: "an element after </svg>: a file holds one drawing"}
+	}
 	parent := r.stack[len(r.stack)-1]
 	if len(r.stack) >= maxSVGDepth {
 		return &Error{File: r.file, Line: line, What: "<" + t.Name.Local + ">", Msg: fmt.Sprintf("elements nest more than %d deep", maxSVGDepth)}
@@ -166,7 +169,7 @@ func (r *svgReader) shape(t xml.StartElement, f svgFrame, line int) error {
 		return &Error{File: r.file, Line: line, What: what, Msg: err.Error()}
 	}
 	if segs == nil && !drawnShapes[name] && name != "g" && name != "svg" {
-		r.sheet.skip(what[:len(name)+2] + "")
+		r.sheet.skip("<" + name + ">")
 	}
 	for _, s := range segs {
 		if !s.A.IsFinite() || !s.B.IsFinite() || !s.Center.IsFinite() {

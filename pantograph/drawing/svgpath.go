@@ -220,6 +220,9 @@ func pathData(d string, m affine, tol float64) ([]geom.Segment, error) {
 			return b.segs, nil
 		}
 		if c := p.s[p.i]; isPathCommand(c) {
+			if cmd == 0 && c|0x20 != 'm' {
+				return nil, fmt.Errorf("path data must start with M or m, got %q", clip(p.s[p.i:]))
+			}
 			cmd = c
 			p.i++
 		} else if cmd == 0 {
