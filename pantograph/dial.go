@@ -115,7 +115,7 @@ func (d Dial) BackOff() float64 {
 }
 
 // Move is how to bring the dial to one position: straight up to Target, or, when Reversal,
-// first back to BackTo (below Target by BackOff) and then up to Target.
+// first back to BackTo (below Target by at least BackOff, on a whole division) and then up.
 type Move struct {
 	Target   float64 // count to stop at, screw units
 	Reversal bool
@@ -132,7 +132,8 @@ func (d Dial) Approach(from float64, counts []float64) []Move {
 		out[i] = Move{Target: c}
 		if c < at-tol {
 			out[i].Reversal = true
-			out[i].BackTo = c - d.BackOff()
+			// a whole division, so the wind-back is easy to set; it only needs to be far enough
+			out[i].BackTo = math.Floor((c-d.BackOff())/d.Division()+divisionSnap) * d.Division()
 		}
 		at = c
 	}

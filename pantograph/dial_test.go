@@ -119,13 +119,15 @@ func TestBackOff(t *testing.T) {
 // move that comes back is a reversal, and it winds back a quarter turn below its target.
 func TestApproachReversal(t *testing.T) {
 	d := Dial{Pitch: 2, Divisions: 100, Backlash: 0.05}
-	got := d.Approach(0, []float64{5, 3, 8, 8, 1})
+	got := d.Approach(0, []float64{5, 3, 8, 8, 1, 0.51})
 	want := []Move{ // derived: back-off 0.5 mm (quarter turn), see TestBackOff
 		{Target: 5},
 		{Target: 3, Reversal: true, BackTo: 2.5},
 		{Target: 8},
 		{Target: 8},
 		{Target: 1, Reversal: true, BackTo: 0.5},
+		// derived: 0.51 − 0.5 = 0.01, half a division, taken down to the whole division 0
+		{Target: 0.51, Reversal: true, BackTo: 0},
 	}
 	if len(got) != len(want) {
 		t.Fatalf("got %d moves, want %d", len(got), len(want))

@@ -14,6 +14,7 @@ Usage:
   panto plan PART --ratio R --cutter D [...]  plan the template: sizes, compensation, order of work
   panto stylus --ratio R --cutter D [...]     the stylus for a cutter, or the cutter for a stylus
   panto import DRAWING [-o PART.toml] [...]   make a part file from a DXF or SVG drawing
+  panto sheet PART --ratio R --cutter D [...] write the dial-reading sheet (PDF, text, CSV, JSON)
   panto help [COMMAND]                        show this help, or a command's help
   panto --version                             show panto's version
 
@@ -109,6 +110,8 @@ func runHelp(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stdout, stylusUsage)
 	case args[0] == "import":
 		fmt.Fprintf(stdout, importUsage, drawing.DefaultHoleMaxMM)
+	case args[0] == "sheet":
+		fmt.Fprint(stdout, sheetUsage)
 	default:
 		fmt.Fprintf(stderr, "panto: no help for %q: there is no such command\n", args[0])
 		return exitUsage

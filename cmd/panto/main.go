@@ -37,6 +37,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return runCheck(rest, stdout, stderr)
 	case "plan":
 		return runPlan(rest, stdout, stderr)
+	case "sheet":
+		return runSheet(rest, stdout, stderr)
 	case "stylus":
 		return runStylus(rest, stdout, stderr)
 	case "import":

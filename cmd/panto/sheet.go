@@ -1,0 +1,203 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"time"
+
+	"github.com/spf13/pflag"
+
+	"panto/pantograph"
+	"panto/pantograph/partfile"
+)
+
+// sheetFlags are the options of `panto sheet` beyond those it shares with `panto plan`.
+type sheetFlags struct {
+	out, paper, date string
+	force, print     bool
+}
+
+const sheetSynopsis = "panto sheet PART --ratio R --cutter D [--machine FILE] [--out DIR] [--paper a4|letter] [--print] [--force]"
+
+// runSheet is `panto sheet PART ...`: plan the part and write the dial-reading sheet.
+func runSheet(args []string, stdout, stderr io.Writer) int {
+	var o planFlags
+	var so sheetFlags
+	fl := pflag.NewFlagSet("sheet", pflag.ContinueOnError)
+	fl.SetOutput(io.Discard)
+	addPlanFlags(fl, &o)
+	fl.StringVarP(&so.out, "out", "o", ".", "folder to write the sheet into")
+	fl.StringVar(&so.paper, "paper", "a4", "paper size: a4 or letter")
+	fl.StringVar(&so.date, "date", "", "date printed on the sheet (default today)")
+	fl.BoolVar(&so.force, "force", false, "overwrite existing files")
+	fl.BoolVar(&so.print, "print", false, "also print the sheet on standard output")
+	if err := fl.Parse(args); err != nil {
+		fmt.Fprintf(stderr, "panto sheet: %v\nRun 'panto help sheet' for usage.\n", err)
+		return exitUsage
+	}
+	if o.help {
+		return runHelp([]string{"sheet"}, stdout, stderr)
+	}
+	if fl.NArg() != 1 {
+		fmt.Fprintf(stderr, "panto sheet: give exactly one part file, got %d\nUsage: %s\n", fl.NArg(), sheetSynopsis)
+		return exitUsage
+	}
+	setup, err := o.setup(fl)
+	if err != nil {
+		fmt.Fprintf(stderr, "panto sheet: %v\n", err)
+		return exitUsage
+	}
+	if so.date == "" {
+		so.date = time.Now().UTC().Format("2006-01-02")
+	}
+	return sheetJob(fl.Arg(0), setup, o.machine, so, stdout, stderr)
+}
+
+// addPlanFlags registers the flags `panto sheet` shares with `panto plan`.
+func addPlanFlags(fl *pflag.FlagSet, o *planFlags) {
+	fl.Float64Var(&o.ratio, "ratio", 0, "template size : part size")
+	fl.Float64Var(&o.cutter, "cutter", 0, "cutter diameter, mm")
+	fl.StringToStringVar(&o.cutterFor, "cutter-for", nil, "cutter for one kind of feature, KIND=MM")
+	fl.Float64Var(&o.stylus, "stylus", 0, "stylus diameter, mm")
+	fl.StringVar(&o.tip, "tip", "", "stylus tip: round or pointed")
+	fl.StringVar(&o.machine, "machine", "", "machine file")
+	fl.BoolVar(&o.mirror, "mirror", false, "mirror the template")
+	fl.Float64Var(&o.rotate, "rotate", 0, "turn the template, degrees counter-clockwise")
+	fl.BoolVar(&o.acceptLoss, "accept-loss", false, "plan even if some features are lost")
+	fl.BoolVar(&o.millHoles, "mill-holes", false, "mill holes larger than the cutter")
+	fl.BoolVarP(&o.help, "help", "h", false, "show help")
+}
+
+// sheetJob reads, plans, and writes the sheet files.
+func sheetJob(path string, setup pantograph.Setup, machinePath string, so sheetFlags, stdout, stderr io.Writer) int {
+	part, err := partfile.ReadFile(path)
+	if err != nil {
+		return reportReadError(err, stderr)
+	}
+	var m *pantograph.Machine
+	if machinePath != "" {
+		mm, err := partfile.ReadMachineFile(machinePath)
+		if err != nil {
+			fmt.Fprintf(stderr, "panto sheet: %v\n", err)
+			return exitUsage
+		}
+		m = &mm
+	}
+	p, err := pantograph.PlanPart(part, setup, m)
+	var pe pantograph.PartErrors
+	switch {
+	case errors.As(err, &pe):
+		for _, pr := range pe {
+			fmt.Fprintln(stderr, pr.Error())
+		}
+		fmt.Fprintf(stderr, "panto sheet: %s has errors; fix them first (panto check shows them all)\n", path)
+		return exitUsage
+	case err != nil:
+		fmt.Fprintf(stderr, "panto sheet: %v\n", err)
+		return exitUsage
+	}
+	if !p.Done() {
+		return planExit(p, stderr)
+	}
+	files, err := sheetFiles(p, m, so.paper, so.date)
+	if err != nil {
+		fmt.Fprintf(stderr, "panto sheet: %v\n", err)
+		return exitUsage
+	}
+	if err := writeSheetFiles(so.out, files, so.force); err != nil {
+		fmt.Fprintf(stderr, "panto sheet: %v\n", err)
+		return exitFailed
+	}
+	if so.print {
+		stdout.Write(files[len(files)-1].data) // sheet.txt is last
+	}
+	for _, w := range p.Warnings {
+		fmt.Fprintf(stderr, "warning: %s\n", w)
+	}
+	return exitOK
+}
+
+// sheetFile is one file to write: its name in the output folder and its bytes.
+type sheetFile struct {
+	name string
+	data []byte
+}
+
+// writeSheetFiles writes every file into dir, each to a temporary name first and then renamed, so
+// an interrupted run leaves no half file. Without force nothing is written if any file exists.
+func writeSheetFiles(dir string, files []sheetFile, force bool) error {
+	if err := os.MkdirAll(dir, 0o755); err != nil {
+		return fmt.Errorf("cannot make the output folder: %w", err)
+	}
+	if !force {
+		for _, f := range files {
+			p := filepath.Join(dir, f.name)
+			if _, err := os.Stat(p); err == nil {
+				return fmt.Errorf("%s exists; pass --force to overwrite it, or choose another --out folder", p)
+			}
+		}
+	}
+	var temps []string
+	defer func() {
+		for _, t := range temps {
+			os.Remove(t)
+		}
+	}()
+	for _, f := range files {
+		tmp, err := os.CreateTemp(dir, "."+f.name+".*.tmp")
+		if err != nil {
+			return fmt.Errorf("cannot write in %s: %w", dir, err)
+		}
+		temps = append(temps, tmp.Name())
+		_, err = tmp.Write(f.data)
+		if err == nil {
+			err = tmp.Chmod(0o644)
+		}
+		if cerr := tmp.Close(); err == nil {
+			err = cerr
+		}
+		if err != nil {
+			return fmt.Errorf("cannot write %s: %w", f.name, err)
+		}
+	}
+	for i, f := range files {
+		if err := os.Rename(temps[i], filepath.Join(dir, f.name)); err != nil {
+			return fmt.Errorf("cannot write %s: %w", f.name, err)
+		}
+	}
+	temps = nil
+	return nil
+}
+
+const sheetUsage = `Usage: ` + sheetSynopsis + `
+
+Plans the part as 'panto plan' does (same flags: --ratio, --cutter, --cutter-for, --stylus,
+--tip, --machine, --mirror, --rotate, --accept-loss, --mill-holes) and writes the dial-reading
+sheet for the machine into the folder --out:
+
+  sheet.pdf    to print, A4 or Letter (--paper), one block per step with a box to tick
+  sheet.txt    the same as plain text (--print also shows it here)
+  sheet.csv    one line per step, for a spreadsheet
+  sheet.json   the same for scripts
+
+Each step gives where the feature is from the datum, in template mm on the copy table and part
+mm on the work table, as turns and divisions of each dial (with the part of a division the
+dial cannot show, and what it is worth at the part); where to wind back first when the dial
+must reverse; the depth of each pass or peck on the depth dial; and the spindle speed, with a
+feed guide for micro tools. The dials, spindle and tools come from the machine file; without
+one, positions are given in mm only. The sheet ends with the plan's warnings, the rules used
+and the safety cautions.
+
+Existing files are not overwritten unless --force is given; each file is written under a
+temporary name and renamed, so an interrupted run leaves no half file.
+
+Flags (besides the plan flags):
+  -o, --out DIR         folder to write into (default: the current folder)
+      --paper a4|letter paper size of sheet.pdf (default a4)
+      --print           print sheet.txt on standard output too
+      --date TEXT       date printed in the header (default: today, UTC)
+      --force           overwrite existing files
+`

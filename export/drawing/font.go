@@ -1,0 +1,47 @@
+package drawing
+
+import (
+	_ "embed" // the fonts are embedded so drawings look the same on every machine
+
+	"fmt"
+
+	"github.com/tdewolff/canvas"
+)
+
+//go:embed fonts/DejaVuSans.ttf
+var sansRegular []byte
+
+//go:embed fonts/DejaVuSans-Bold.ttf
+var sansBold []byte
+
+// Fonts are the faces drawings and sheets are lettered in.
+type Fonts struct {
+	family *canvas.FontFamily
+}
+
+// LoadFonts parses the embedded fonts. Each writer loads its own, so nothing is shared
+// between goroutines.
+func LoadFonts() (*Fonts, error) {
+	fam := canvas.NewFontFamily("DejaVu Sans")
+	if err := fam.LoadFont(sansRegular, 0, canvas.FontRegular); err != nil {
+		return nil, fmt.Errorf("drawing: loading the regular font: %w", err)
+	}
+	if err := fam.LoadFont(sansBold, 0, canvas.FontBold); err != nil {
+		return nil, fmt.Errorf("drawing: loading the bold font: %w", err)
+	}
+	return &Fonts{family: fam}, nil
+}
+
+// Face returns a black face of size points, bold when asked.
+func (f *Fonts) Face(size float64, bold bool) *canvas.FontFace {
+	style := canvas.FontRegular
+	if bold {
+		style = canvas.FontBold
+	}
+	return f.family.Face(size, canvas.Black, style)
+}
+
+// Width returns the width in mm of s set in a face of size points.
+func (f *Fonts) Width(s string, size float64, bold bool) float64 {
+	return f.Face(size, bold).TextWidth(s)
+}

@@ -1,0 +1,69 @@
+package sheet
+
+import (
+	"encoding/csv"
+	"fmt"
+	"io"
+	"strings"
+
+	"panto/pantograph"
+)
+
+// csvHeader names the columns of the CSV sheet. Positions are mm from the datum (template mm
+// on the copy table, part mm on the work table); readings are "T t D div" as the dial shows
+// them; passes are depths in mm separated by spaces.
+func csvHeader() []string {
+	return []string{"step", "number", "feature", "kind", "action", "tool", "stylus",
+		"copy_x_mm", "copy_y_mm", "copy_x", "copy_y", "work_x_mm", "work_y_mm", "work_x", "work_y",
+		"wind_back", "depth_mm", "passes_mm", "depth_readings", "rpm", "feed_mm_min", "done"}
+}
+
+// EncodeCSV writes one line per row of s under a header line; the last column is left empty
+// for ticking off.
+func EncodeCSV(w io.Writer, s pantograph.Sheet) error {
+	cw := csv.NewWriter(w)
+	if err := cw.Write(csvHeader()); err != nil {
+		return err
+	}
+	for _, r := range s.Rows {
+		if err := cw.Write(csvRow(r, s.Dials)); err != nil {
+			return err
+		}
+	}
+	cw.Flush()
+	return cw.Error()
+}
+
+// csvRow lays out one row.
+func csvRow(r pantograph.SheetRow, dials []pantograph.DialInfo) []string {
+	rec := []string{fmt.Sprint(r.Step), fmt.Sprint(r.Number), r.Feature, string(r.What), r.Action, r.Tool, r.Stylus}
+	p := r.Where
+	if p == nil {
+		p = &pantograph.Position{}
+	}
+	rd := func(x pantograph.Reading, d pantograph.DialInfo) string {
+		if !d.Stated {
+			return ""
+		}
+		return reading(x)
+	}
+	rec = append(rec, num(p.Template.X), num(p.Template.Y), rd(p.CopyX, dials[0]), rd(p.CopyY, dials[1]),
+		num(p.Part.X), num(p.Part.Y), rd(p.WorkX, dials[2]), rd(p.WorkY, dials[3]),
+		strings.Join(p.BackOff, "; "))
+	var depths, readings []string
+	for _, ps := range r.Passes {
+		depths = append(depths, num(ps.Depth))
+		readings = append(readings, rd(ps.Reading, dials[4]))
+	}
+	depth, rpm, feed := "", "", ""
+	if r.What != pantograph.StepDatum {
+		depth = num(r.Depth)
+	}
+	if r.RPM > 0 {
+		rpm = fmt.Sprintf("%.0f", r.RPM)
+	}
+	if r.Feed > 0 {
+		feed = num(r.Feed)
+	}
+	return append(rec, depth, strings.Join(depths, " "), strings.Join(readings, "; "), rpm, feed, "")
+}

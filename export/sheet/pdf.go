@@ -1,0 +1,203 @@
+package sheet
+
+import (
+	"bytes"
+	"fmt"
+	"io"
+	"strings"
+
+	"github.com/tdewolff/canvas"
+	"github.com/tdewolff/canvas/renderers/pdf"
+
+	"panto/export/drawing"
+	"panto/geom"
+	"panto/pantograph"
+)
+
+// Type sizes in points and spacing in mm for the printed sheet: 9–10 pt reads at arm's length
+// at the machine; the readings are set bold so they stand out in black and white (common
+// practice, no source).
+const (
+	sizeTitle   = 15
+	sizeHead    = 11
+	sizeBody    = 9
+	sizeReading = 10
+	pageMargin  = 15 // mm
+	lineGap     = 1.45
+	boxSize     = 4.2 // mm, the tick box
+	indent      = 8   // mm, body lines under a step's heading
+)
+
+// EncodePDF writes s as a PDF on paper, with real (searchable) text and a tick box per step.
+func EncodePDF(w io.Writer, s pantograph.Sheet, paper drawing.Paper) error {
+	fonts, err := drawing.LoadFonts()
+	if err != nil {
+		return err
+	}
+	dry := &flow{fonts: fonts, paper: paper, dry: true}
+	layout(dry, s)
+	var buf bytes.Buffer
+	r := pdf.New(&buf, paper.W, paper.H, nil)
+	r.SetInfo(title(s), "dial readings for a pantograph mill", "", "", "panto")
+	f := &flow{fonts: fonts, paper: paper, r: r, pages: dry.page}
+	f.start()
+	layout(f, s)
+	f.footer()
+	if err := r.Close(); err != nil {
+		return fmt.Errorf("sheet: %w", err)
+	}
+	return drawing.WriteFixed(w, buf.Bytes())
+}
+
+// flow sets lines down the page and starts a new page when one is full. A dry flow only counts
+// pages, so the footer can say "page 1 of 3".
+type flow struct {
+	fonts *drawing.Fonts
+	paper drawing.Paper
+	r     *pdf.PDF
+	pen   drawing.Pen
+	dry   bool
+	y     float64
+	page  int
+	pages int
+}
+
+// start begins the first page.
+func (f *flow) start() {
+	f.page, f.y = 1, f.paper.H-pageMargin
+	if !f.dry {
+		f.pen = drawing.Pen{Ctx: canvas.NewContext(f.r), Fonts: f.fonts}
+	}
+}
+
+// need starts a new page unless h mm are left above the bottom margin.
+func (f *flow) need(h float64) {
+	if f.page == 0 {
+		f.start()
+	}
+	if f.y-h >= pageMargin+6 {
+		return
+	}
+	if !f.dry {
+		f.footer()
+		f.r.NewPage(f.paper.W, f.paper.H)
+	}
+	f.page++
+	f.y = f.paper.H - pageMargin
+}
+
+// footer prints the page number at the bottom of the page.
+func (f *flow) footer() {
+	if f.dry {
+		return
+	}
+	f.pen.Text(f.paper.W/2, pageMargin/2, 8, false, fmt.Sprintf("page %d of %d", f.page, f.pages), canvas.Center)
+}
+
+// text sets one paragraph at x mm from the left margin, wrapped to the text width.
+func (f *flow) text(x, size float64, bold bool, s string) {
+	width := f.paper.W - 2*pageMargin - x
+	for _, l := range f.wrap(s, size, bold, width) {
+		h := size * 0.3528 * lineGap // points to mm, times the line gap
+		f.need(h)
+		f.y -= h
+		if !f.dry {
+			f.pen.Text(pageMargin+x, f.y, size, bold, l, canvas.Left)
+		}
+	}
+}
+
+// wrap breaks s into lines no wider than width mm.
+func (f *flow) wrap(s string, size float64, bold bool, width float64) []string {
+	words := strings.Fields(s)
+	if len(words) == 0 {
+		return []string{""}
+	}
+	var out []string
+	cur := words[0]
+	for _, w := range words[1:] {
+		if f.fonts.Width(cur+" "+w, size, bold) > width {
+			out = append(out, cur)
+			cur = w
+			continue
+		}
+		cur += " " + w
+	}
+	return append(out, cur)
+}
+
+// space leaves h mm blank.
+func (f *flow) space(h float64) { f.need(h); f.y -= h }
+
+// rule draws a thin line across the page.
+func (f *flow) rule() {
+	f.space(1.5)
+	if !f.dry {
+		f.pen.Line(geom.V(pageMargin, f.y), geom.V(f.paper.W-pageMargin, f.y), 0.2)
+	}
+}
+
+// layout sets the whole sheet.
+func layout(f *flow, s pantograph.Sheet) {
+	f.text(0, sizeTitle, true, title(s))
+	f.space(1)
+	for _, h := range header(s) {
+		f.labelled(h[0], h[1])
+	}
+	f.rule()
+	f.text(0, sizeHead, true, "Dials")
+	for _, d := range s.Dials {
+		f.labelled(d.Name, dialLine(d))
+	}
+	f.rule()
+	f.text(0, sizeHead, true, "Steps: tick each box when done")
+	for _, r := range s.Rows {
+		f.step(r, s.Dials)
+	}
+	f.rule()
+	f.list("Warnings", s.Warnings, "None: every feature comes out as drawn.")
+	f.list("Notes", s.Notes, "")
+	f.list("Safety", s.Cautions, "")
+}
+
+// labelled sets a bold label with its value beside it.
+func (f *flow) labelled(label, value string) {
+	before := f.y
+	f.text(28, sizeBody, false, value)
+	if !f.dry && label != "" && f.y < before {
+		f.pen.Text(pageMargin, before-sizeBody*0.3528*lineGap, sizeBody, true, label, canvas.Left)
+	}
+}
+
+// step sets one step: a tick box and heading, then its lines, kept on one page.
+func (f *flow) step(r pantograph.SheetRow, dials []pantograph.DialInfo) {
+	lines := rowLines(r, dials)
+	f.need(float64(len(lines)+2) * sizeReading * 0.3528 * lineGap)
+	f.space(2)
+	top := f.y
+	f.text(indent, sizeReading+1, true, stepTitle(r))
+	if !f.dry {
+		b := geom.Box{Min: geom.V(pageMargin, top-boxSize-0.6), Max: geom.V(pageMargin+boxSize, top-0.6)}
+		f.pen.Rect(b, 0.35)
+	}
+	for _, l := range lines {
+		bold := strings.HasPrefix(l, "copy table") || strings.HasPrefix(l, "work table") || strings.HasPrefix(l, "first ")
+		size := float64(sizeBody)
+		if bold {
+			size = sizeReading
+		}
+		f.text(indent+2, size, bold, l)
+	}
+}
+
+// list sets a titled list of items.
+func (f *flow) list(name string, items []string, empty string) {
+	f.space(1)
+	f.text(0, sizeHead, true, name)
+	if len(items) == 0 && empty != "" {
+		f.text(4, sizeBody, false, empty)
+	}
+	for _, it := range items {
+		f.text(4, sizeBody, false, "• "+it)
+	}
+}
