@@ -2,6 +2,7 @@ package dxf
 
 import (
 	"math"
+	"strconv"
 
 	"panto/geom"
 )
@@ -252,7 +253,8 @@ func (e *encoder) lwpolyline(layer string, vs []vertex, closed bool) {
 		e.num(10, v.p.X)
 		e.num(20, v.p.Y)
 		if v.bulge != 0 {
-			e.num(42, v.bulge)
+			// Written in full: a bulge rounded to 1e-9 moves a large arc's centre visibly.
+			e.pair(42, strconv.FormatFloat(v.bulge, 'g', -1, 64))
 		}
 	}
 }
