@@ -31,7 +31,7 @@ func TestBulges(t *testing.T) {
 		c     geom.Contour
 		bulge string
 	}{
-		{"counter-clockwise 90°", ccw, "0.414213562"},  // derived: tan(π/8)
+		{"counter-clockwise 90°", ccw, "0.414213562"},    // derived: tan(π/8)
 		{"clockwise 90°", ccw.Reverse(), "-0.414213562"}, // derived: −tan(π/8)
 	}
 	for _, tc := range tests {
