@@ -74,7 +74,7 @@ func (k *classifier) outlines() ([]outline, []pantograph.Feature, error) {
 		items := by[name]
 		rule := k.opts.Layers[name]
 		if rule.Ignore {
-			k.rep.Made = append(k.rep.Made, fmt.Sprintf("layer %q: %d segments left out, as asked", name, len(items)))
+			k.rep.Made = append(k.rep.Made, fmt.Sprintf("layer %q: %d segment(s) left out, as asked", name, len(items)))
 			continue
 		}
 		segs := make([]geom.Segment, len(items))
@@ -304,9 +304,10 @@ func (k *classifier) opening(o outline, count map[pantograph.Kind]int) {
 	size := o.c.Bounds().Size()
 	line := fmt.Sprintf("%s: %s, %s × %s", f.Label(), k.from(o), k.len(size.X), k.len(size.Y))
 	if kind == pantograph.KindPocket {
-		line += ", depth " + depth.String()
-		if !depth.Given() {
-			line += ": give one with --layer NAME=pocket:DEPTH or in the part file"
+		if depth.Given() {
+			line += ", depth " + k.len(depth.MM)
+		} else {
+			line += ", no depth: give one with --layer NAME=pocket:DEPTH or in the part file"
 		}
 	}
 	k.rep.Made = append(k.rep.Made, line)

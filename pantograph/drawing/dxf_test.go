@@ -170,7 +170,7 @@ func TestReadDXFClassify(t *testing.T) {
 	if !strings.Contains(rep.Skipped, "1 TEXT") || !strings.Contains(rep.Skipped, "1 DIMENSION") {
 		t.Errorf("got skipped %q, want 1 TEXT and 1 DIMENSION", rep.Skipped)
 	}
-	if !strings.Contains(strings.Join(rep.Made, "\n"), `layer "CONSTRUCTION": 4 segments left out`) {
+	if !strings.Contains(strings.Join(rep.Made, "\n"), `layer "CONSTRUCTION": 4 segment(s) left out`) {
 		t.Errorf("report does not say the ignored layer was left out:\n%s", strings.Join(rep.Made, "\n"))
 	}
 }

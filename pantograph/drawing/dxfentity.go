@@ -24,6 +24,7 @@ type dxfReader struct {
 	tol   float64 // chord tolerance in mm
 	stack []string
 	uses  int // block uses so far, bounded by maxSegments so that empty blocks cannot loop on
+	via   *dxfEntity // the outermost INSERT being read, named in messages instead of block lines
 }
 
 // entities reads es under map m; inherit is the layer of the INSERT they belong to, for
@@ -107,7 +108,12 @@ func (em emitter) addMapped(s geom.Segment) error {
 	if len(em.r.sheet.Items) >= maxSegments {
 		return em.errf("more than %d segments: this drawing is far larger than any part panto makes", maxSegments)
 	}
-	em.r.sheet.Items = append(em.r.sheet.Items, Item{Seg: s, Layer: em.layer, Line: em.e.line, What: em.e.kind})
+	it := Item{Seg: s, Layer: em.layer, Line: em.e.line, What: em.e.kind}
+	if v := em.r.via; v != nil {
+		// The user finds an inserted block by its INSERT, not by the block's definition.
+		it.Line, it.What = v.line, fmt.Sprintf("%s of INSERT %q", em.e.kind, v.str(2))
+	}
+	em.r.sheet.Items = append(em.r.sheet.Items, it)
 	return nil
 }
 
@@ -325,6 +331,10 @@ func (r *dxfReader) insert(e dxfEntity, m affine, layer string) error {
 			e.line, name, sc[0], sc[1], r.tol)
 	}
 	r.stack = append(r.stack, name)
+	if r.via == nil {
+		r.via = &e
+		defer func() { r.via = nil }()
+	}
 	defer func() { r.stack = r.stack[:len(r.stack)-1] }()
 	for c := 0; c < cols; c++ {
 		for w := 0; w < rows; w++ {
