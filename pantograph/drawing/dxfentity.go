@@ -23,7 +23,7 @@ type dxfReader struct {
 	sheet *Sheet
 	tol   float64 // chord tolerance in mm
 	stack []string
-	uses  int // block uses so far, bounded by maxSegments so that empty blocks cannot loop on
+	uses  int        // block uses so far, bounded by maxSegments so that empty blocks cannot loop on
 	via   *dxfEntity // the outermost INSERT being read, named in messages instead of block lines
 }
 
