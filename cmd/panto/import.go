@@ -25,11 +25,13 @@ type importFlags struct {
 	holeMax float64
 	layers  []string
 	join    float64
+	thick   float64
+	stuff   string
 	force   bool
 	help    bool
 }
 
-const importSynopsis = "panto import DRAWING.dxf|DRAWING.svg [-o PART.toml] [--units mm|in] [--hole-max D] [--layer NAME=KIND[:DEPTH]]... [--force]"
+const importSynopsis = "panto import DRAWING.dxf|DRAWING.svg [-o PART.toml] [--units mm|in] [--hole-max D] [--layer NAME=KIND[:DEPTH]]... [--thickness T] [--force]"
 
 // runImport is `panto import DRAWING`: read a DXF or SVG drawing, say what became what, and
 // write a part file.
@@ -42,6 +44,8 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 	fl.Float64Var(&o.holeMax, "hole-max", 0, "circles this diameter or smaller become drilled holes (drawing units)")
 	fl.StringArrayVar(&o.layers, "layer", nil, "NAME=KIND[:DEPTH]: what a layer's outlines are")
 	fl.Float64Var(&o.join, "join", 0, "join ends this close, in mm (default 0.001)")
+	fl.Float64Var(&o.thick, "thickness", 0, "stock thickness, in the drawing's units")
+	fl.StringVar(&o.stuff, "material", "", "stock material, e.g. brass")
 	fl.BoolVar(&o.force, "force", false, "overwrite the part file if it exists")
 	fl.BoolVarP(&o.help, "help", "h", false, "show help")
 	if err := fl.Parse(args); err != nil {
@@ -65,7 +69,11 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 
 // options turns the flags into drawing options.
 func (o importFlags) options() (drawing.Options, error) {
-	opts := drawing.Options{HoleMax: o.holeMax, JoinTol: o.join, Layers: map[string]drawing.LayerRule{}}
+	opts := drawing.Options{HoleMax: o.holeMax, JoinTol: o.join, Layers: map[string]drawing.LayerRule{},
+		Thickness: o.thick, Material: o.stuff}
+	if !(o.thick >= 0 && o.thick < 1e6) {
+		return opts, fmt.Errorf("--thickness must be 0 or more, got %g", o.thick)
+	}
 	switch pantograph.Units(o.units) {
 	case "", pantograph.MM, pantograph.Inch:
 		opts.Units = pantograph.Units(o.units)
@@ -168,13 +176,13 @@ func writeFileAtomic(path string, data []byte) error {
 	return err
 }
 
-// readPartOrDrawing reads a part file, or a DXF or SVG drawing with the default import
-// options (its report going to stderr), so that commands taking a part accept a drawing too.
-func readPartOrDrawing(path string, stderr io.Writer) (pantograph.Part, error) {
+// readPartOrDrawing reads a part file, or a DXF or SVG drawing with opts (its report going to
+// stderr), so that commands taking a part accept a drawing too.
+func readPartOrDrawing(path string, opts drawing.Options, stderr io.Writer) (pantograph.Part, error) {
 	if !drawing.IsDrawing(path) {
 		return partfile.ReadFile(path)
 	}
-	part, rep, err := drawing.ReadFile(path, drawing.Options{})
+	part, rep, err := drawing.ReadFile(path, opts)
 	if err == nil {
 		rep.WriteTo(stderr)
 	}
@@ -209,6 +217,9 @@ Flags:
                           to engrave) or ignore; DEPTH in the drawing's units, e.g.
                           --layer RECESS=pocket:0.3  --layer CENTRES=ignore
   --join MM               join ends this close together (default 0.001 mm)
+  --thickness T           the stock's thickness, in the drawing's units (drawings do not
+                          carry it; panto check and plan need it)
+  --material NAME         the stock's material, for the part file
   --force                 overwrite the part file if it exists
   -h, --help              show this help
 

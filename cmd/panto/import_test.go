@@ -39,6 +39,11 @@ func TestImportExitCodes(t *testing.T) {
 		{"would overwrite", []string{"import", "-o", exists, drawings + "plate-mm.dxf"}, exitUsage, "already exists; give --force"},
 		// The bad value "1,5" is on line 8 of the file (derived by counting).
 		{"bad drawing", []string{"import", "-o", filepath.Join(dir, "b.toml"), badDXF}, exitUsage, "bad.dxf:8: CIRCLE: group 10 should be a number"},
+		// plan reads drawings too; a drawing has no stock thickness, so the part fails its
+		// checks, and the message names the drawing.
+		{"plan a drawing", []string{"plan", drawings + "pump-port-plate.svg", "--ratio", "10", "--cutter", "0.5"}, exitUsage,
+			"pump-port-plate.svg:6: error: [stock]: stock thickness missing"},
+		{"bad thickness", []string{"import", "--thickness", "-1", drawings + "plate-mm.dxf"}, exitUsage, "--thickness must be 0 or more"},
 		{"open outline", []string{"import", "-o", filepath.Join(dir, "c.toml"), drawings + "calibration-coupon-in.dxf"}, exitUsage,
 			"loose end at (-0.1000, 0.5000)"},
 	}
@@ -74,7 +79,7 @@ func TestImportWritesPartFile(t *testing.T) {
 		report  string
 	}{
 		// Derived: 30 × 20 less two corners of 3 × 3 squares, plus two quarter discs R3.
-		{"SVG in mm", "pump-port-plate.svg", nil, pantograph.MM, 600 - 2*(9-9*math.Pi/4), 4, "profile: <path id=\"outline\">"},
+		{"SVG in mm", "pump-port-plate.svg", []string{"--thickness", "0.8"}, pantograph.MM, 600 - 2*(9-9*math.Pi/4), 4, "profile: <path id=\"outline\">"},
 		// Derived: 1.5 × 1 in less a corner of 0.25 in, plus its quarter disc, in mm². The
 		// file's bulge is written to 6 decimals, so the arc differs by about 1e-7 in.
 		{"DXF in inches", "calibration-coupon-in.dxf", []string{"--layer", "CENTRE=ignore", "--layer", "RECESS=pocket:0.01"},
@@ -94,6 +99,9 @@ func TestImportWritesPartFile(t *testing.T) {
 			p, err := partfile.ReadFile(out)
 			if err != nil {
 				t.Fatalf("the part file does not read: %v", err)
+			}
+			if tc.drawing == "pump-port-plate.svg" && p.Stock.Thickness != 0.8 {
+				t.Errorf("got stock thickness %g, want 0.8 as given", p.Stock.Thickness)
 			}
 			if p.Units != tc.units {
 				t.Errorf("got units %q, want %q", p.Units, tc.units)

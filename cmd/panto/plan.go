@@ -13,6 +13,7 @@ import (
 	"panto/export/planjson"
 	"panto/geom"
 	"panto/pantograph"
+	"panto/pantograph/drawing"
 	"panto/pantograph/partfile"
 )
 
@@ -63,7 +64,7 @@ func runPlan(args []string, stdout, stderr io.Writer) int {
 
 // plan reads the files, plans, prints and picks the exit code.
 func plan(path string, setup pantograph.Setup, o planFlags, stdout, stderr io.Writer) int {
-	part, err := partfile.ReadFile(path)
+	part, err := readPartOrDrawing(path, drawing.Options{}, stderr)
 	if err != nil {
 		return reportReadError(err, stderr)
 	}

@@ -37,7 +37,8 @@ func Classify(sh *Sheet, opts Options) (pantograph.Part, Report, error) {
 	k.rep = Report{File: sh.File, UnitsNote: sh.UnitsNote, Warnings: append([]string(nil), sh.Warnings...),
 		Skipped: sh.skippedText()}
 	name := strings.TrimSuffix(filepath.Base(sh.File), filepath.Ext(sh.File))
-	k.part = pantograph.Part{Name: name, Units: sh.Units, Source: sh.File}
+	k.part = pantograph.Part{Name: name, Units: sh.Units, Source: sh.File,
+		Stock: pantograph.Stock{Material: opts.Material, Thickness: opts.Thickness * k.scale}}
 	outs, grooves, err := k.outlines()
 	if err != nil {
 		return pantograph.Part{}, k.rep, err

@@ -28,6 +28,11 @@ type Options struct {
 	// defaultJoinTol.
 	JoinTol float64
 
+	// Thickness and Material describe the stock, which drawings do not carry; Thickness is in
+	// the drawing's units, 0 when not known.
+	Thickness float64
+	Material  string
+
 	// ChordTol is how far, in mm, the chords that replace ellipses, splines and Bézier curves
 	// may stray from them; 0 means geom.DefaultChordTolerance.
 	ChordTol float64
