@@ -61,5 +61,25 @@ func sheetFiles(p pantograph.Plan, m *pantograph.Machine, paperName, date string
 
 // drawingFiles returns template.svg, template.pdf, part.svg and part.pdf.
 func drawingFiles(part pantograph.Part, p pantograph.Plan, paperName string) ([]sheetFile, error) {
-	return nil, nil
+	paper, err := drawing.PaperNamed(paperName)
+	if err != nil {
+		return nil, fmt.Errorf("--paper: %v", err)
+	}
+	var out []sheetFile
+	for _, f := range []struct {
+		name string
+		enc  func(*bytes.Buffer) error
+	}{
+		{"template.svg", func(b *bytes.Buffer) error { return drawing.EncodeTemplateSVG(b, p) }},
+		{"template.pdf", func(b *bytes.Buffer) error { return drawing.EncodeTemplatePDF(b, p, paper) }},
+		{"part.svg", func(b *bytes.Buffer) error { return drawing.EncodePartSVG(b, part, p, paper) }},
+		{"part.pdf", func(b *bytes.Buffer) error { return drawing.EncodePartPDF(b, part, p, paper) }},
+	} {
+		var b bytes.Buffer
+		if err := f.enc(&b); err != nil {
+			return nil, fmt.Errorf("%s: %w", f.name, err)
+		}
+		out = append(out, sheetFile{f.name, b.Bytes()})
+	}
+	return out, nil
 }

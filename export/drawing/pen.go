@@ -85,6 +85,19 @@ func (p Pen) Cross(c geom.Vec, r, w float64) {
 	p.Line(c.Add(geom.V(0, -r)), c.Add(geom.V(0, r)), w)
 }
 
+// Arrow fills an arrowhead with its point at tip, pointing along the unit vector dir.
+func (p Pen) Arrow(tip, dir geom.Vec) {
+	back := tip.Sub(dir.Mul(arrowLength))
+	side := dir.Perp().Mul(arrowLength / 3.5)
+	a, b := back.Add(side), back.Sub(side)
+	path := &canvas.Path{}
+	path.MoveTo(tip.X, tip.Y)
+	path.LineTo(a.X, a.Y)
+	path.LineTo(b.X, b.Y)
+	path.Close()
+	p.fill(path, canvas.Black)
+}
+
 // Text sets s with its baseline at (x, y): align is canvas.Left, canvas.Center or canvas.Right.
 func (p Pen) Text(x, y, size float64, bold bool, s string, align canvas.TextAlign) {
 	p.Ctx.DrawText(x, y, canvas.NewTextLine(p.Fonts.Face(size, bold), s, align))
