@@ -1,6 +1,10 @@
 package drawing
 
-import "panto/geom"
+import (
+	"math"
+
+	"panto/geom"
+)
 
 // maxSplineDegree bounds a spline's degree; drawing programs write 2 or 3, and evaluation
 // costs grow with the square of it.
@@ -10,42 +14,11 @@ const maxSplineDegree = 15
 // control points, flattened to chords within the chord tolerance. A spline given only by fit
 // points is drawn through them with straight lines, and the report says so.
 func (r *dxfReader) spline(em emitter, m affine) error {
-	var knots, weights []float64
-	var ctrl, fit []geom.Vec
-	for _, g := range em.e.groups {
-		switch g.code {
-		case 10, 20, 11, 21, 40, 41:
-		default:
-			continue
-		}
-		v, err := parseNum(r.file, em.e.kind, g)
-		if err != nil {
-			return err
-		}
-		switch g.code {
-		case 10:
-			ctrl = append(ctrl, geom.V(v, 0))
-		case 20:
-			if len(ctrl) > 0 {
-				ctrl[len(ctrl)-1].Y = v
-			}
-		case 11:
-			fit = append(fit, geom.V(v, 0))
-		case 21:
-			if len(fit) > 0 {
-				fit[len(fit)-1].Y = v
-			}
-		case 40:
-			knots = append(knots, v)
-		case 41:
-			weights = append(weights, v)
-		}
-	}
-	deg, err := em.e.num(r.file, 71, 3)
+	s, fit, err := r.splineGroups(em)
 	if err != nil {
 		return err
 	}
-	if len(ctrl) == 0 {
+	if len(s.ctrl) == 0 {
 		if len(fit) < 2 {
 			return em.errf("has neither control points (group 10) nor fit points (group 11)")
 		}
@@ -56,7 +29,6 @@ func (r *dxfReader) spline(em emitter, m affine) error {
 		}
 		return em.polySegments(m, vs, false)
 	}
-	s := bspline{deg: int(deg), knots: knots, ctrl: ctrl, weights: weights}
 	if msg := s.check(); msg != "" {
 		return em.errf("%s", msg)
 	}
@@ -69,6 +41,48 @@ func (r *dxfReader) spline(em emitter, m affine) error {
 		}
 	}
 	return nil
+}
+
+// splineGroups reads a SPLINE's degree, knots, control points, weights and fit points.
+func (r *dxfReader) splineGroups(em emitter) (bspline, []geom.Vec, error) {
+	var s bspline
+	var fit []geom.Vec
+	deg, err := em.e.num(r.file, 71, 3)
+	if err != nil {
+		return s, nil, err
+	}
+	s.deg = int(math.Max(-1, math.Min(deg, maxSplineDegree+1)))
+	for _, g := range em.e.groups {
+		if g.code != 10 && g.code != 20 && g.code != 11 && g.code != 21 && g.code != 40 && g.code != 41 {
+			continue
+		}
+		v, err := parseNum(r.file, em.e.kind, g)
+		if err != nil {
+			return s, nil, err
+		}
+		switch g.code {
+		case 10:
+			s.ctrl = append(s.ctrl, geom.V(v, 0))
+		case 20:
+			setY(s.ctrl, v)
+		case 11:
+			fit = append(fit, geom.V(v, 0))
+		case 21:
+			setY(fit, v)
+		case 40:
+			s.knots = append(s.knots, v)
+		case 41:
+			s.weights = append(s.weights, v)
+		}
+	}
+	return s, fit, nil
+}
+
+// setY sets the y of the last point, when there is one.
+func setY(ps []geom.Vec, y float64) {
+	if len(ps) > 0 {
+		ps[len(ps)-1].Y = y
+	}
 }
 
 // bspline is a (possibly rational) B-spline curve.

@@ -333,58 +333,25 @@ func (r *svgReader) root(t xml.StartElement, line int) error {
 // userToMM works out millimetres per user unit from width, height and viewBox, and flips y so
 // that +Y points up with the bottom edge of the sheet at y = 0.
 func (r *svgReader) userToMM(t xml.StartElement, line int) (affine, error) {
-	fail := func(msg string) (affine, error) {
-		return affine{}, &Error{File: r.file, Line: line, What: "<svg>", Msg: msg}
-	}
-	var vb []float64
-	if s := attr(t, "viewBox"); s != "" {
-		var err error
-		vb, err = plainNumbers(s)
-		if err != nil || len(vb) != 4 || !(vb[2] > 0 && vb[3] > 0) {
-			return fail(fmt.Sprintf("viewBox=%q: expected four numbers, min-x min-y width height, the sizes greater than 0", clip(s)))
-		}
-	}
-	w, wu, err := parseLength(attr(t, "width"))
+	sz, err := readRootSize(t)
 	if err != nil {
-		return fail("width: " + err.Error())
+		return affine{}, &Error{File: r.file, Line: line, What: "<svg>", Msg: err.Error()}
 	}
-	h, hu, err := parseLength(attr(t, "height"))
-	if err != nil {
-		return fail("height: " + err.Error())
-	}
-	physical := isPhysical(wu) || isPhysical(hu)
+	kx, ky := sz.scales()
 	r.sheet.Units = pantograph.MM
-	if wu == "in" || hu == "in" {
+	if sz.wu == "in" || sz.hu == "in" {
 		r.sheet.Units = pantograph.Inch
 	}
-	// Millimetres per user unit along x and y, and the viewBox origin.
-	kx, ky, ox, oy := 25.4/96, 25.4/96, 0.0, 0.0
-	if vb != nil {
-		ox, oy = vb[0], vb[1]
-		if w > 0 {
-			kx = w * unitMM(wu) / vb[2]
-		}
-		if h > 0 {
-			ky = h * unitMM(hu) / vb[3]
-		}
-		if w > 0 && h == 0 {
-			ky = kx
-		} else if h > 0 && w == 0 {
-			kx = ky
-		}
-	}
-	switch {
+	switch physical := isPhysical(sz.wu) || isPhysical(sz.hu); {
+	case r.opts.Units != "" && !physical:
+		kx, ky = unitScale(r.opts.Units), unitScale(r.opts.Units)
+		r.sheet.UnitsNote = fmt.Sprintf("--units %s: one SVG user unit is 1 %s", r.opts.Units, r.opts.Units)
+		r.sheet.Units = r.opts.Units
 	case r.opts.Units != "":
-		if !physical {
-			kx, ky = unitScale(r.opts.Units), unitScale(r.opts.Units)
-			r.sheet.UnitsNote = fmt.Sprintf("--units %s: one SVG user unit is 1 %s", r.opts.Units, r.opts.Units)
-		} else {
-			r.sheet.UnitsNote = fmt.Sprintf("size from width/height (--units %s sets only the part file's units)", r.opts.Units)
-		}
+		r.sheet.UnitsNote = fmt.Sprintf("size from width/height (--units %s sets only the part file's units)", r.opts.Units)
 		r.sheet.Units = r.opts.Units
 	case physical:
-		r.sheet.UnitsNote = fmt.Sprintf("width %q, height %q: %.6g mm per user unit",
-			attr(t, "width"), attr(t, "height"), kx)
+		r.sheet.UnitsNote = fmt.Sprintf("width %q, height %q: %.6g mm per user unit", attr(t, "width"), attr(t, "height"), kx)
 	default:
 		r.sheet.UnitsNote = "no physical size (width and height in px or absent): assumed 96 px per inch"
 		r.sheet.warnf("%s:%d: <svg> gives no physical size; read at 96 px per inch (%.6g mm per px). "+
@@ -393,15 +360,65 @@ func (r *svgReader) userToMM(t xml.StartElement, line int) (affine, error) {
 	}
 	if math.Abs(kx-ky) > 1e-9*math.Max(kx, ky) {
 		// preserveAspectRatio's default (xMidYMid meet) scales uniformly by the smaller factor.
-		k := math.Min(kx, ky)
-		r.sheet.warnf("%s:%d: <svg> width/height and viewBox differ in proportion: read at the smaller scale, %.6g mm per unit", r.file, line, k)
-		kx, ky = k, k
+		kx, ky = math.Min(kx, ky), math.Min(kx, ky)
+		r.sheet.warnf("%s:%d: <svg> width/height and viewBox differ in proportion: read at the smaller scale, %.6g mm per unit", r.file, line, kx)
 	}
-	sheetH := ky * 0
-	if vb != nil {
-		sheetH = vb[3] * ky
-	} else if h > 0 {
-		sheetH = h * unitMM(hu)
+	sheetH := 0.0
+	if sz.vb != nil {
+		sheetH = sz.vb[3] * ky
+	} else if sz.h > 0 {
+		sheetH = sz.h * unitMM(sz.hu)
+	}
+	ox, oy := 0.0, 0.0
+	if sz.vb != nil {
+		ox, oy = sz.vb[0], sz.vb[1]
 	}
 	return translation(-ox, -oy).then(scaling(kx, -ky)).then(translation(0, sheetH)), nil
+}
+
+// rootSize is what the <svg> element says of its size.
+type rootSize struct {
+	w, h   float64 // 0 when absent
+	wu, hu string  // their CSS units
+	vb     []float64
+}
+
+func readRootSize(t xml.StartElement) (rootSize, error) {
+	var sz rootSize
+	if s := attr(t, "viewBox"); s != "" {
+		vb, err := plainNumbers(s)
+		if err != nil || len(vb) != 4 || !(vb[2] > 0 && vb[3] > 0) {
+			return sz, fmt.Errorf("viewBox=%q: expected four numbers, min-x min-y width height, the sizes greater than 0", clip(s))
+		}
+		sz.vb = vb
+	}
+	var err error
+	if sz.w, sz.wu, err = parseLength(attr(t, "width")); err != nil {
+		return sz, fmt.Errorf("width: %v", err)
+	}
+	if sz.h, sz.hu, err = parseLength(attr(t, "height")); err != nil {
+		return sz, fmt.Errorf("height: %v", err)
+	}
+	return sz, nil
+}
+
+// scales returns millimetres per user unit along x and y: CSS px without a viewBox, else the
+// viewport's size over the viewBox's (a missing width or height follows the other).
+func (sz rootSize) scales() (float64, float64) {
+	kx, ky := 25.4/96, 25.4/96
+	if sz.vb == nil {
+		return kx, ky
+	}
+	if sz.w > 0 {
+		kx = sz.w * unitMM(sz.wu) / sz.vb[2]
+	}
+	if sz.h > 0 {
+		ky = sz.h * unitMM(sz.hu) / sz.vb[3]
+	}
+	if sz.w > 0 && sz.h == 0 {
+		ky = kx
+	} else if sz.h > 0 && sz.w == 0 {
+		kx = ky
+	}
+	return kx, ky
 }
