@@ -29,6 +29,9 @@ func LoadFonts() (*Fonts, error) {
 	if err := fam.LoadFont(sansBold, 0, canvas.FontBold); err != nil {
 		return nil, fmt.Errorf("drawing: loading the bold font: %w", err)
 	}
+	// No ligatures: "fi" set as one glyph comes out of a PDF as "ﬁ", and a search for a
+	// feature named "fixing screws" would not find it.
+	fam.SetFeatures("-liga,-clig")
 	return &Fonts{family: fam}, nil
 }
 
