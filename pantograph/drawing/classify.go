@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"path/filepath"
+	"slices"
 	"sort"
 	"strings"
 
@@ -89,7 +90,7 @@ func (k *classifier) outlines() ([]outline, []pantograph.Feature, error) {
 			case rule.Kind == pantograph.KindGroove:
 				grooves = append(grooves, k.groove(ch, items[ch.Src[0]], rule, len(grooves)+1))
 			case ch.Closed:
-				outs = append(outs, outline{c: ch.Contour(), layer: name, rule: rule, first: items[ch.Src[0]], n: len(ch.Segs)})
+				outs = append(outs, outline{c: ch.Contour(), layer: name, rule: rule, first: items[slices.Min(ch.Src)], n: len(ch.Segs)})
 			default:
 				if firstOpenLine == 0 {
 					firstOpenLine = items[ch.Src[0]].Line
@@ -98,6 +99,8 @@ func (k *classifier) outlines() ([]outline, []pantograph.Feature, error) {
 			}
 		}
 	}
+	// Take the outlines in the order they were drawn, so the report reads down the file.
+	sort.SliceStable(outs, func(i, j int) bool { return outs[i].first.Line < outs[j].first.Line })
 	if len(open) > 0 {
 		return nil, nil, &Error{File: k.sh.File, Line: firstOpenLine, Msg: fmt.Sprintf(
 			"%d outline(s) do not close within %g mm:\n%s\nClose them in the drawing, or map their layer with "+
