@@ -55,6 +55,9 @@ func scanDXF(file string, src []byte) ([]dxfGroup, error) {
 			return nil, &Error{File: file, Line: line, Msg: fmt.Sprintf("group code %d has no value: the file ends here", code)}
 		}
 		line++
+		if code == 999 {
+			continue // a comment
+		}
 		gs = append(gs, dxfGroup{code: code, val: strings.TrimRight(sc.Text(), "\r"), line: line - 1})
 		if len(gs) > maxDXFGroups {
 			return nil, &Error{File: file, Line: line, Msg: "too many groups: this drawing is far larger than any part panto makes"}

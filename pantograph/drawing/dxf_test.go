@@ -63,6 +63,15 @@ func TestReadDXFShapes(t *testing.T) {
 	}
 }
 
+func TestReadDXFComments(t *testing.T) {
+	src := "999\nwritten by hand\n" + dxfDoc(4, "", square("0", 0, 0, 2)...)
+	p, _, err := Read("c.dxf", []byte(src), Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	approx(t, "area", p.Profile.Region.Area(), 4, 1e-12) // derived: 2 × 2
+}
+
 func TestReadDXFUnitsNote(t *testing.T) {
 	_, rep, err := Read("t.dxf", []byte(dxfDoc(-1, "", square("0", 0, 0, 3)...)), Options{})
 	if err != nil {

@@ -168,7 +168,7 @@ func (r *svgReader) shape(t xml.StartElement, f svgFrame, line int) error {
 	if err != nil {
 		return &Error{File: r.file, Line: line, What: what, Msg: err.Error()}
 	}
-	if segs == nil && !drawnShapes[name] && name != "g" && name != "svg" {
+	if segs == nil && !drawnShapes[name] && name != "g" && name != "svg" && name != "a" {
 		r.sheet.skip("<" + name + ">")
 	}
 	for _, s := range segs {
