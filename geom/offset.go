@@ -47,14 +47,22 @@ func (r Region) Offset(d float64) OffsetResult {
 
 // offset does the work of Offset and also returns how many kept pieces chainLoops could not
 // close into a loop, which is zero unless rounding defeated the method; tests check it.
-func (r Region) offset(d float64) (OffsetResult, int) {
+func (r Region) offset(d float64) (OffsetResult, int) { return r.offsetWith(d, true) }
+
+// offsetWith is offset with the prefilter (see prefilter.go) on or off; tests compare the two.
+func (r Region) offsetWith(d float64, trim bool) (OffsetResult, int) {
 	r = r.Normalize()
 	cs := r.Contours()
 	groups := make([][]Segment, len(cs))
+	origins := make([][]rawOrigin, len(cs))
 	for i, c := range cs {
-		groups[i] = rawOffset(c, d)
+		groups[i], origins[i] = rawOffsetFrom(c, d)
 	}
-	kept := keepOffsetPieces(splitPieces(groups), newSegIndex(cs), math.Abs(d))
+	idx := newSegIndex(cs)
+	if trim {
+		groups = prefilterGroups(groups, origins, idx, d)
+	}
+	kept := keepOffsetPieces(splitPieces(groups), idx, math.Abs(d))
 	loops, srcs, open := chainLoops(pruneDangling(kept))
 	res := OffsetResult{Regions: assemble(loops)}
 	res.Vanished, res.Split, res.Merged = contourFates(len(cs), srcs)
@@ -157,6 +165,12 @@ func turnAt(s, t Segment) float64 {
 // arcs whose offset vanished, both are trimmed to their crossing nearest the gap. Anything
 // else that overlaps is left for the filter.
 func rawOffset(c Contour, d float64) []Segment {
+	out, _ := rawOffsetFrom(c, d)
+	return out
+}
+
+// rawOffsetFrom is rawOffset that also says where each curve came from.
+func rawOffsetFrom(c Contour, d float64) ([]Segment, []rawOrigin) {
 	n := len(c)
 	offs := make([]Segment, n)
 	ok := make([]bool, n)
@@ -176,12 +190,13 @@ func rawOffset(c Contour, d float64) []Segment {
 		}
 	}
 	out := make([]Segment, 0, 2*n)
+	from := make([]rawOrigin, 0, 2*n)
 	for i := range c {
 		if ok[i] {
-			out = append(out, offs[i])
+			out, from = append(out, offs[i]), append(from, rawOrigin{i, false})
 		}
 		if hasJoin[i] {
-			out = append(out, joins[i])
+			out, from = append(out, joins[i]), append(from, rawOrigin{i, true})
 		}
 	}
 	for k := range out {
@@ -189,7 +204,7 @@ func rawOffset(c Contour, d float64) []Segment {
 			trimCorner(&out[k], &out[next])
 		}
 	}
-	return out
+	return out, from
 }
 
 // snapJoint makes the offsets of two segments s (index i) and t (index j) that meet
@@ -367,15 +382,18 @@ const segIndexLeaf = 4
 // segIndexLeaf segments into leaf boxes and pairs of boxes into parents, level by level.
 type segIndex struct {
 	segs   []Segment
+	starts []int   // contour k's segments are segs[starts[k]:starts[k+1]]
 	levels [][]Box // levels[0] holds the leaf boxes; the last level holds one box
 }
 
 // newSegIndex indexes every segment of the given contours.
 func newSegIndex(cs []Contour) *segIndex {
-	x := &segIndex{}
+	x := &segIndex{starts: make([]int, 0, len(cs)+1)}
 	for _, c := range cs {
+		x.starts = append(x.starts, len(x.segs))
 		x.segs = append(x.segs, c...)
 	}
+	x.starts = append(x.starts, len(x.segs))
 	leaves := make([]Box, (len(x.segs)+segIndexLeaf-1)/segIndexLeaf)
 	for i := range leaves {
 		b := EmptyBox()

@@ -39,10 +39,36 @@ func benchBlob(tb testing.TB, n int, jitter float64) Region {
 		wavy(V(-12, 0), hole, 5, false), wavy(V(12, 0), hole, 5, false))
 }
 
-// benchmarkOffset grows and shrinks the region of about n vertices by half a millimetre, a
-// typical stylus compensation at a 10:1 ratio.
+// benchJagged returns a deterministic star-shaped polygon of n vertices about the origin with
+// mean radius 20 and a few broad lobes, every vertex's radius jumping at random by up to half
+// an edge length: a traced outline at its noisiest. Offset by many edge lengths, every raw
+// curve of it overlaps hundreds of others.
+func benchJagged(n int) Region {
+	rng := rand.New(rand.NewSource(int64(n)))
+	const r = 20
+	edge := 2 * math.Pi * r / float64(n)
+	pts := make([]Vec, n)
+	for i := range pts {
+		a := 2 * math.Pi * float64(i) / float64(n)
+		rr := r*(1+0.15*math.Sin(5*a+1)) + edge*(rng.Float64()-0.5)
+		pts[i] = Polar(Vec{}, rr, a)
+	}
+	return NewRegion(Polygon(pts...))
+}
+
+// benchmarkOffset grows and shrinks a wavy region (benchBlob) and a jagged one (benchJagged)
+// of about n vertices by half a millimetre, a typical stylus compensation at a 10:1 ratio.
 func benchmarkOffset(b *testing.B, n int) {
-	r := benchBlob(b, n, 0.01)
+	for _, in := range []struct {
+		name string
+		r    Region
+	}{{"wavy", benchBlob(b, n, 0.01)}, {"jagged", benchJagged(n)}} {
+		b.Run(in.name, func(b *testing.B) { benchmarkOffsetOf(b, in.r) })
+	}
+}
+
+// benchmarkOffsetOf grows and shrinks r by half a millimetre.
+func benchmarkOffsetOf(b *testing.B, r Region) {
 	for _, d := range []float64{0.5, -0.5} {
 		name := "grow"
 		if d < 0 {
