@@ -250,7 +250,7 @@ func dialInfo(name string, d Dial, scale float64) DialInfo {
 func (b sheetBuilder) notes() []string {
 	out := []string{
 		"Readings count from the datum; each dial is set to its datum reading with the stylus in the datum seat. Come up to every reading with the dial counting up; where a row says wind back, go back past the reading by the amount given and come up again (backlash: machine-shop training notes).",
-		"The remainder after a reading is the part of a division the dial cannot show; what it is worth at the part is given beside it.",
+		"The remainder after a reading is the part of a division the dial cannot show; what it is worth at the part is given beside it. The figure in [ ] is the distance from the datum, in the dial's own units.",
 		"Speeds: " + SpeedSource + ".",
 		"Through cuts go past the stock by a break-through allowance: 0.05 mm for cutters, plus the point length (0.3 × D, derived from a 118° point) for drills.",
 	}

@@ -106,12 +106,22 @@ func positionLines(p *pantograph.Position, dials []pantograph.DialInfo) []string
 	return out
 }
 
-// axisText is a reading with its distance from the datum, or the distance alone without a dial.
+// axisText is a reading with its distance from the datum in the dial's own units, or the
+// distance in mm alone without a dial.
 func axisText(r pantograph.Reading, mm float64, d pantograph.DialInfo) string {
 	if !d.Stated {
 		return num(mm) + " mm"
 	}
-	return fmt.Sprintf("%s [%s mm]", reading(r), num(mm))
+	return fmt.Sprintf("%s [%s]", reading(r), length(mm, d.Units))
+}
+
+// length formats mm in units: "132.08 mm" or "5.2 in" (inches to 0.0001, a tenth of the
+// finest common inch division).
+func length(mm float64, u pantograph.Units) string {
+	if u == pantograph.Inch {
+		return fine(mm/pantograph.MMPerInch) + " in"
+	}
+	return num(mm) + " mm"
 }
 
 // depthLines gives the depth and passes of a row.
@@ -123,18 +133,25 @@ func depthLines(r pantograph.SheetRow, depth pantograph.DialInfo) []string {
 	if r.What == pantograph.StepDrill {
 		word = plural(len(r.Passes), "peck", "pecks")
 	}
+	total := num(r.Depth) + " mm"
+	if depth.Stated && depth.Units == pantograph.Inch {
+		total = length(r.Depth, pantograph.Inch) + " (" + total + ")"
+	}
 	if len(r.Passes) == 0 {
-		return []string{fmt.Sprintf("depth %s mm: %s", num(r.Depth), r.PassRule)}
+		return []string{fmt.Sprintf("depth %s: %s", total, r.PassRule)}
 	}
 	parts := make([]string, len(r.Passes))
 	for i, p := range r.Passes {
 		parts[i] = num(p.Depth)
 		if depth.Stated {
 			parts[i] += " (" + reading(p.Reading) + ")"
+			if depth.Units == pantograph.Inch {
+				parts[i] = fmt.Sprintf("%s (%s)", length(p.Depth, pantograph.Inch), reading(p.Reading))
+			}
 		}
 	}
 	return []string{
-		fmt.Sprintf("depth %s mm in %d %s: %s", num(r.Depth), len(r.Passes), word, strings.Join(parts, ", ")),
+		fmt.Sprintf("depth %s in %d %s: %s", total, len(r.Passes), word, strings.Join(parts, ", ")),
 		"rule: " + r.PassRule,
 	}
 }
