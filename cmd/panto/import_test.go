@@ -44,6 +44,11 @@ func TestImportExitCodes(t *testing.T) {
 		{"plan a drawing", []string{"plan", drawings + "pump-port-plate.svg", "--ratio", "10", "--cutter", "0.5"}, exitUsage,
 			"pump-port-plate.svg:6: error: [stock]: stock thickness missing"},
 		{"bad thickness", []string{"import", "--thickness", "-1", drawings + "plate-mm.dxf"}, exitUsage, "--thickness must be 0 or more"},
+		// The fixture's second line starts 0.05 from where the first ends (derived: 0.05 − 0).
+		{"gap reported", []string{"import", "-o", filepath.Join(dir, "g.toml"), drawings + "triangle-gap.dxf"}, exitUsage,
+			"loose end at (10.0000, 0.0000) (gap of 0.05 mm to (10.0000, 0.0500))"},
+		{"gap joined", []string{"import", "-o", filepath.Join(dir, "j.toml"), "--join", "0.06", drawings + "triangle-gap.dxf"}, exitOK,
+			"profile: LINE at line 5"},
 		{"open outline", []string{"import", "-o", filepath.Join(dir, "c.toml"), drawings + "calibration-coupon-in.dxf"}, exitUsage,
 			"loose end at (-0.1000, 0.5000)"},
 	}
@@ -61,7 +66,7 @@ func TestImportExitCodes(t *testing.T) {
 	if b, _ := os.ReadFile(exists); string(b) != "keep me" {
 		t.Errorf("an existing file was overwritten without --force")
 	}
-	for _, n := range []string{"b.toml", "c.toml"} {
+	for _, n := range []string{"b.toml", "c.toml", "g.toml"} {
 		if _, err := os.Stat(filepath.Join(dir, n)); err == nil {
 			t.Errorf("%s was written from a bad drawing", n)
 		}

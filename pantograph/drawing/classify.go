@@ -103,8 +103,9 @@ func (k *classifier) outlines() ([]outline, []pantograph.Feature, error) {
 	sort.SliceStable(outs, func(i, j int) bool { return outs[i].first.Line < outs[j].first.Line })
 	if len(open) > 0 {
 		return nil, nil, &Error{File: k.sh.File, Line: firstOpenLine, Msg: fmt.Sprintf(
-			"%d outline(s) do not close within %g mm:\n%s\nClose them in the drawing, or map their layer with "+
-				"--layer NAME=ignore (construction lines) or --layer NAME=groove (engraved lines).",
+			"%d outline(s) do not close within %g mm:\n%s\nClose them in the drawing; or, if the gaps are slips of the "+
+				"pen, join ends that far apart with --join MM; or map the layer with --layer NAME=ignore "+
+				"(construction lines) or --layer NAME=groove (engraved lines).",
 			len(open), k.opts.joinTol(), strings.Join(open, "\n"))}
 	}
 	return outs, grooves, nil
