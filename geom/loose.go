@@ -29,7 +29,9 @@ type LooseResult struct {
 // point: a line simply, an arc by passing it through its own middle and the moved ends, so
 // every arc stays a true arc. Where more than two segments meet at a point the chain takes
 // them in input order; such drawings are not outlines, and contours made from them should be
-// validated. A full circle is a closed chain on its own. Work is close to linear in the
+// validated. A full circle is a closed chain on its own, and so is an arc of more than half a
+// turn whose ends meet within tol (made a full circle); other segments whose ends meet within
+// tol are dropped and listed as degenerate. Work is close to linear in the
 // number of segments: end points are found through a grid of cells tol wide.
 func JoinLoose(segs []Segment, tol float64) LooseResult {
 	tol = math.Max(tol, pointTol)
@@ -41,6 +43,12 @@ func JoinLoose(segs []Segment, tol float64) LooseResult {
 			continue
 		}
 		a, b := g.node(s.A), g.node(s.B)
+		if a == b && s.IsArc() && math.Abs(s.Sweep) > math.Pi {
+			// An arc whose ends meet within tol is a circle drawn with a slip of the pen.
+			c := ArcFrom(s.A, s.Center, math.Copysign(2*math.Pi, s.Sweep))
+			res.Chains = append(res.Chains, LooseChain{Segs: []Segment{c}, Src: []int{i}, Closed: true})
+			continue
+		}
 		if a == b {
 			res.Degenerate = append(res.Degenerate, i)
 			continue

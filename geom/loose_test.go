@@ -25,6 +25,8 @@ func TestJoinLoose(t *testing.T) {
 		{"zero-length line dropped", append(append(Contour{}, sq...), Line(V(5, 5), V(5, 5.0001))), 1, 0, 0, 1, 100},
 		// Area derived: π·2² for a circle of radius 2.
 		{"lone circle", Circle(V(3, 3), 2), 1, 0, 0, 0, 4 * math.Pi},
+		// Derived: an arc of 359.99999° about (0, 0), radius 1, closes into the unit disc.
+		{"nearly full arc", []Segment{Arc(V(0, 0), 1, 0, 2*math.Pi-1e-7)}, 1, 0, 0, 0, math.Pi},
 		// Half discs: a 10 mm line and a semicircle of radius 5, area π·25/2.
 		{"line and arc", []Segment{ArcFrom(V(10, 0), V(5, 0), math.Pi), Line(V(0, 0), V(10, 0))}, 1, 0, 0, 0, 12.5 * math.Pi},
 	}
