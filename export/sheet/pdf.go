@@ -150,14 +150,15 @@ func layout(f *flow, s pantograph.Sheet) {
 		f.labelled(d.Name, dialLine(d))
 	}
 	f.rule()
+	f.list("Warnings", s.Warnings, "None: every feature comes out as drawn.")
+	f.list("Safety", s.Cautions, "")
+	f.rule()
 	f.text(0, sizeHead, true, "Steps: tick each box when done")
 	for _, r := range s.Rows {
 		f.step(r, s.Dials)
 	}
 	f.rule()
-	f.list("Warnings", s.Warnings, "None: every feature comes out as drawn.")
 	f.list("Notes", s.Notes, "")
-	f.list("Safety", s.Cautions, "")
 }
 
 // labelled sets a bold label with its value beside it.
@@ -198,6 +199,10 @@ func (f *flow) list(name string, items []string, empty string) {
 		f.text(4, sizeBody, false, empty)
 	}
 	for _, it := range items {
-		f.text(4, sizeBody, false, "• "+it)
+		before := f.y
+		f.text(7, sizeBody, false, it)
+		if !f.dry && f.y < before {
+			f.pen.Text(pageMargin+3, before-sizeBody*0.3528*lineGap, sizeBody, false, "•", canvas.Left)
+		}
 	}
 }

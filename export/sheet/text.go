@@ -12,8 +12,8 @@ import (
 // 10-point fixed font.
 const textWidth = 96
 
-// EncodeText writes s as plain text: a header, the dials, one block per step with a box to tick,
-// then warnings, notes and cautions.
+// EncodeText writes s as plain text: a header, the dials, the warnings and safety cautions
+// (read before starting), one block per step with a box to tick, then the notes on the rules.
 func EncodeText(w io.Writer, s pantograph.Sheet) error {
 	bw := bufio.NewWriter(w)
 	// line writes text after indent; lines too long are broken at spaces and carried on under
@@ -33,6 +33,8 @@ func EncodeText(w io.Writer, s pantograph.Sheet) error {
 	for _, d := range s.Dials {
 		line("  ", 8, padRight(d.Name, 8)+dialLine(d))
 	}
+	section(bw, line, "Warnings", s.Warnings, "none: every feature comes out as drawn")
+	section(bw, line, "Safety", s.Cautions, "")
 	bw.WriteString("\nSteps (tick each box when done)\n")
 	for _, r := range s.Rows {
 		bw.WriteString("\n")
@@ -41,9 +43,7 @@ func EncodeText(w io.Writer, s pantograph.Sheet) error {
 			line("      ", 2, l)
 		}
 	}
-	section(bw, line, "Warnings", s.Warnings, "none: every feature comes out as drawn")
 	section(bw, line, "Notes", s.Notes, "")
-	section(bw, line, "Safety", s.Cautions, "")
 	return bw.Flush()
 }
 
