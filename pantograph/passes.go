@@ -27,11 +27,14 @@ type PassRule struct {
 // half the diameter in soft metals, a quarter in mild steel, a tenth in tool steel, halved again
 // for micro cutters, which break before they wear (common practice, from memory; no published
 // source in REFERENCES.md).
-var millShare = map[string]float64{
-	groupAluminium: 0.5,
-	groupBrass:     0.5,
-	groupMild:      0.25,
-	groupTool:      0.1,
+func millShare(group string) float64 {
+	switch group {
+	case groupAluminium, groupBrass:
+		return 0.5
+	case groupMild:
+		return 0.25
+	}
+	return 0.1
 }
 
 // engraveStep is the depth per pass of an engraver, mm: a few hundredths, whatever its width,
@@ -50,7 +53,7 @@ func MillPassRule(kind string, d float64, material string) PassRule {
 	if kind == ToolEngrave {
 		return PassRule{engraveStep, fmt.Sprintf("engraver: %.2f mm per pass (common practice, from memory)", engraveStep)}
 	}
-	share := millShare[g]
+	share := millShare(g)
 	rule := fmt.Sprintf("%g × D in %s", share, g)
 	if d < microTool {
 		share /= 2

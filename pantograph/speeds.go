@@ -29,24 +29,31 @@ const (
 	groupTool      = "tool steel"
 )
 
-// hssSpeed holds HSS surface speeds in m/min, drilling and milling, by material group. Drilling
+// hssSpeed returns HSS surface speeds in m/min, drilling and milling, by material group. Drilling
 // from shop speed tables (aluminium ~76, brass/bronze ~61, mild steel ~34, tool steel ~18);
 // milling the low end of their ranges (76–150, 45–135, 21–37, 12–21).
-var hssSpeed = map[string]struct{ drill, mill float64 }{
-	groupAluminium: {76, 76},
-	groupBrass:     {61, 45},
-	groupMild:      {34, 21},
-	groupTool:      {18, 12},
+func hssSpeed(group string) (drill, mill float64) {
+	switch group {
+	case groupAluminium:
+		return 76, 76
+	case groupBrass:
+		return 61, 45
+	case groupMild:
+		return 34, 21
+	}
+	return 18, 12
 }
 
-// materialWords maps words in a stock's free-text material to a group; the first match wins,
-// so "tool steel" is tried before "steel".
-var materialWords = []struct{ word, group string }{
-	{"alumin", groupAluminium}, {"dural", groupAluminium},
-	{"brass", groupBrass}, {"bronze", groupBrass}, {"copper", groupBrass}, {"nickel silver", groupBrass},
-	{"tool steel", groupTool}, {"silver steel", groupTool}, {"gauge plate", groupTool},
-	{"stainless", groupTool}, {"drill rod", groupTool},
-	{"mild steel", groupMild}, {"steel", groupMild}, {"iron", groupMild},
+// materialWords returns the words looked for in a stock's free-text material, each with its
+// group; the first match wins, so "tool steel" is tried before "steel".
+func materialWords() []struct{ word, group string } {
+	return []struct{ word, group string }{
+		{"alumin", groupAluminium}, {"dural", groupAluminium},
+		{"brass", groupBrass}, {"bronze", groupBrass}, {"copper", groupBrass}, {"nickel silver", groupBrass},
+		{"tool steel", groupTool}, {"silver steel", groupTool}, {"gauge plate", groupTool},
+		{"stainless", groupTool}, {"drill rod", groupTool},
+		{"mild steel", groupMild}, {"steel", groupMild}, {"iron", groupMild},
+	}
 }
 
 // MaterialGroup returns the speed-table group for a stock material and whether it was
@@ -54,7 +61,7 @@ var materialWords = []struct{ word, group string }{
 // a guess never runs a tool too fast.
 func MaterialGroup(material string) (string, bool) {
 	m := strings.ToLower(material)
-	for _, w := range materialWords {
+	for _, w := range materialWords() {
 		if strings.Contains(m, w.word) {
 			return w.group, true
 		}
@@ -66,9 +73,10 @@ func MaterialGroup(material string) (string, bool) {
 // with a tool of toolMaterial ("hss" or "carbide"; anything else counts as HSS).
 func SurfaceSpeed(material, toolMaterial string, drill bool) float64 {
 	g, _ := MaterialGroup(material)
-	v := hssSpeed[g].mill
+	vd, vm := hssSpeed(g)
+	v := vm
 	if drill {
-		v = hssSpeed[g].drill
+		v = vd
 	}
 	if strings.EqualFold(toolMaterial, "carbide") {
 		v *= carbideFactor

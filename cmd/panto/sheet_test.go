@@ -5,6 +5,9 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"panto/pantograph"
+	"panto/pantograph/partfile"
 )
 
 // sheetArgs runs the pump port plate on the bench machine at 10:1 with a 0.5 mm cutter.
@@ -75,5 +78,37 @@ func TestSheetUsage(t *testing.T) {
 				t.Errorf("got exit %d %q, want %d with %q", code, stderr, exitUsage, tc.frag)
 			}
 		})
+	}
+}
+
+// TestMakeSheetFiles checks the hook make calls: every file named once, sheet.txt last.
+func TestMakeSheetFiles(t *testing.T) {
+	root := filepath.Join("..", "..", "samples")
+	part, err := partfile.ReadFile(filepath.Join(root, "clock-bridge.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	m, err := partfile.ReadMachineFile(filepath.Join(root, "machines", "bench-pantograph.machine.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := pantograph.PlanPart(part, pantograph.Setup{Ratio: 7, Cutter: 0.5}, &m)
+	if err != nil {
+		t.Fatal(err)
+	}
+	files, err := makeSheetFiles(part, p, &m, "letter", "")
+	if err != nil {
+		t.Fatal(err)
+	}
+	var names []string
+	for _, f := range files {
+		if len(f.data) == 0 {
+			t.Errorf("%s is empty", f.name)
+		}
+		names = append(names, f.name)
+	}
+	want := "sheet.pdf sheet.csv sheet.json template.svg template.pdf part.svg part.pdf sheet.txt"
+	if got := strings.Join(names, " "); got != want {
+		t.Errorf("got %v, want %v", got, want)
 	}
 }
