@@ -6,6 +6,7 @@ package sheet
 
 import (
 	"fmt"
+	"math"
 	"strconv"
 	"strings"
 
@@ -156,6 +157,15 @@ func depthLines(r pantograph.SheetRow, depth pantograph.DialInfo) []string {
 	}
 }
 
+// roughly formats a guide figure to two significant digits: a feed guide is not exact.
+func roughly(v float64) string {
+	if v <= 0 {
+		return "0"
+	}
+	p := math.Pow(10, math.Floor(math.Log10(v))-1)
+	return strconv.FormatFloat(math.Round(v/p)*p, 'f', max(0, int(-math.Log10(p)+0.5)), 64)
+}
+
 // plural picks the word for n things.
 func plural(n int, one, many string) string {
 	if n == 1 {
@@ -174,7 +184,7 @@ func speedLine(r pantograph.SheetRow) string {
 		s += " (" + r.SpeedNote + ")"
 	}
 	if r.Feed > 0 {
-		s += fmt.Sprintf("; feed about %s mm/min, %s", num(r.Feed), r.FeedRule)
+		s += fmt.Sprintf("; feed about %s mm/min, %s", roughly(r.Feed), r.FeedRule)
 	}
 	return s
 }

@@ -176,3 +176,17 @@ func TestWrap(t *testing.T) {
 		})
 	}
 }
+
+func TestRoughly(t *testing.T) {
+	tests := []struct {
+		v    float64
+		want string
+	}{
+		{24.271, "24"}, {95.25, "95"}, {7.5, "7.5"}, {0.123, "0.12"}, {1234, "1200"}, // derived
+	}
+	for _, tc := range tests {
+		if got := roughly(tc.v); got != tc.want {
+			t.Errorf("roughly(%v): got %v, want %v", tc.v, got, tc.want)
+		}
+	}
+}
