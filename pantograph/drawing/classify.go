@@ -249,6 +249,11 @@ func (k *classifier) features(profile geom.Region, outs []outline) {
 	sort.SliceStable(k.part.Features, func(i, j int) bool {
 		return kindOrder(k.part.Features[i].Kind) < kindOrder(k.part.Features[j].Kind)
 	})
+	for _, f := range k.part.Features {
+		if f.Kind == pantograph.KindHoles {
+			k.rep.Made = append(k.rep.Made, k.holesLine(f))
+		}
+	}
 }
 
 func kindOrder(kd pantograph.Kind) int {
@@ -288,8 +293,27 @@ func (k *classifier) hole(holes map[holeKey]int, o outline, d float64) {
 		holes[key] = i
 	}
 	k.part.Features[i].Centers = append(k.part.Features[i].Centers, center)
-	k.rep.Made = append(k.rep.Made, fmt.Sprintf("hole Ø%s at %s (%s), %s: %s",
-		k.len(d), k.pt(center), depth, k.from(o), k.part.Features[i].Label()))
+}
+
+// maxListedHoles is how many hole centres one report line lists before saying how many more.
+const maxListedHoles = 6
+
+// holesLine describes a holes feature in one report line.
+func (k *classifier) holesLine(f pantograph.Feature) string {
+	var at []string
+	for i, c := range f.Centers {
+		if i == maxListedHoles {
+			at = append(at, fmt.Sprintf("and %d more", len(f.Centers)-i))
+			break
+		}
+		at = append(at, k.pt(c))
+	}
+	depth := "through"
+	if !f.Depth.Through {
+		depth = "depth " + k.len(f.Depth.MM)
+	}
+	return fmt.Sprintf("%s: %d hole(s) Ø%s, %s, first a circle at line %d: at %s",
+		f.Label(), len(f.Centers), k.len(f.Diameter), depth, f.Where.Line, strings.Join(at, ", "))
 }
 
 // opening adds a cut-out or pocket.

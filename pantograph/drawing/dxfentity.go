@@ -8,10 +8,10 @@ import (
 	"panto/geom"
 )
 
-// maxSegments bounds the segments one drawing may produce, blocks inserted included: a
-// million segments is far more than any part outline and keeps a hostile file from running
-// the reader out of memory.
-const maxSegments = 1_000_000
+// maxSegments bounds the segments one drawing may produce, blocks inserted included: 200 000
+// is far more than any part outline needs, even with splines cut into chords, and keeps a
+// hostile file from running the reader and the classification out of time and memory.
+const maxSegments = 200_000
 
 // maxBlockDepth bounds how deeply blocks may insert blocks; real drawings nest a few levels.
 const maxBlockDepth = 16

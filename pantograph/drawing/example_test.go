@@ -27,7 +27,6 @@ func ExampleRead() {
 	//   units: width "20mm", height "10mm": 1 mm per user unit
 	//   profile: <rect> at line 2, 20 mm × 10 mm, 4 segment(s)
 	//   [[cutout]] "cutout 1": <rect> at line 3, 4 mm × 4 mm
-	//   hole Ø1.2 mm at (3.0000, 5.0000) (through), <circle> at line 4: [[holes]] "holes 1.2 mm"
-	//   hole Ø1.2 mm at (17.0000, 5.0000) (through), <circle> at line 5: [[holes]] "holes 1.2 mm"
+	//   [[holes]] "holes 1.2 mm": 2 hole(s) Ø1.2 mm, through, first a circle at line 4: at (3.0000, 5.0000), (17.0000, 5.0000)
 	// 2 features; profile area 200.0 mm²
 }
