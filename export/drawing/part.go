@@ -5,6 +5,7 @@ import (
 	"io"
 	"math"
 	"strconv"
+	"strings"
 
 	"github.com/tdewolff/canvas"
 
@@ -87,11 +88,11 @@ func (l partLayout) draw(pen Pen, off geom.Vec) {
 	t := l.t.Then(geom.Translate(off))
 	top := off.Y + l.size.Y
 	pen.Text(off.X, top-6, 14, true, "Part: "+l.part.Name, canvas.Left)
-	pen.Text(off.X, top-12, 8.5, false, fmt.Sprintf("Scale %s:1 (the drawing is %s times the part). Dimensions in mm, measured from the datum.",
-		trim(l.scale), trim(l.scale)), canvas.Left)
+	pen.Text(off.X, top-12, 8.5, false, fmt.Sprintf("Scale %s:1 (the drawing is %s times the part). Dimensions in %s, measured from the datum.",
+		trim(l.scale), trim(l.scale), l.unitWord()), canvas.Left)
 	stock := l.part.Stock.Material
 	if l.part.Stock.Thickness > 0 {
-		stock += fmt.Sprintf(", %s mm thick", trim(l.part.Stock.Thickness))
+		stock += ", " + l.depth(pantograph.Depth{MM: l.part.Stock.Thickness}) + " thick"
 	}
 	pen.Text(off.X, top-17, 8.5, false, "Stock: "+stock+". Numbers # match the dial-reading sheet and the template.", canvas.Left)
 	for _, c := range l.part.Profile.Region.Contours() {
@@ -159,7 +160,7 @@ func (l partLayout) dimensions(pen Pen, t geom.Transform) {
 	pen.Line(geom.V(lo.X, y), geom.V(hi.X, y), markLine)
 	pen.Arrow(geom.V(lo.X, y), geom.V(-1, 0))
 	pen.Arrow(geom.V(hi.X, y), geom.V(1, 0))
-	pen.Text((lo.X+hi.X)/2, y+1.2, 9, false, trim(size.X), canvas.Center)
+	pen.Text((lo.X+hi.X)/2, y+1.2, 9, false, l.length(size.X), canvas.Center)
 	x := lo.X - 8
 	pen.Line(geom.V(lo.X-1, lo.Y), geom.V(x-2, lo.Y), markLine)
 	pen.Line(geom.V(lo.X-1, hi.Y), geom.V(x-2, hi.Y), markLine)
@@ -168,7 +169,7 @@ func (l partLayout) dimensions(pen Pen, t geom.Transform) {
 	pen.Arrow(geom.V(x, hi.Y), geom.V(0, 1))
 	pen.Ctx.Push()
 	pen.Ctx.RotateAbout(90, x-1.2, (lo.Y+hi.Y)/2)
-	pen.Text(x-1.2, (lo.Y+hi.Y)/2, 9, false, trim(size.Y), canvas.Center)
+	pen.Text(x-1.2, (lo.Y+hi.Y)/2, 9, false, l.length(size.Y), canvas.Center)
 	pen.Ctx.Pop()
 }
 
@@ -177,7 +178,7 @@ func (l partLayout) table(pen Pen, off geom.Vec) {
 	y := off.Y + (l.size.Y-partTop)*(1-partShare) - 4
 	cols := []float64{0, 12, 62, 80, 100, 120}
 	head := []string{"#", "feature", "Ø", "X", "Y", "depth"}
-	pen.Text(off.X, y, 10, true, "Holes and features (mm; X and Y from the datum)", canvas.Left)
+	pen.Text(off.X, y, 10, true, "Holes and features ("+l.unitWord()+"; X and Y from the datum)", canvas.Left)
 	y -= tableLine + 1
 	for i, h := range head {
 		pen.Text(off.X+cols[i], y, 8.5, true, h, canvas.Left)
@@ -211,15 +212,40 @@ func (l partLayout) rows() [][]string {
 		if f.Kind == pantograph.KindHoles {
 			for _, c := range f.Centers {
 				p := c.Sub(l.part.Datum)
-				out = append(out, []string{no, name, trim(f.Diameter), trim(p.X), trim(p.Y), f.Depth.String()})
+				out = append(out, []string{no, name, l.length(f.Diameter), l.length(p.X), l.length(p.Y), l.depth(f.Depth)})
 			}
 			continue
 		}
-		dep := f.Depth.String()
+		dep := l.depth(f.Depth)
 		if f.Kind == pantograph.KindCutout {
 			dep = "through"
 		}
 		out = append(out, []string{no, name + " (" + string(f.Kind) + ")", "", "", "", dep})
 	}
 	return out
+}
+
+// unitWord names the units the part was drawn in, which the drawing's numbers are given in.
+func (l partLayout) unitWord() string {
+	if l.part.Units == pantograph.Inch {
+		return "inches"
+	}
+	return "mm"
+}
+
+// length formats mm in the part's own units: inches to 0.0001, mm to 0.001.
+func (l partLayout) length(mm float64) string {
+	if l.part.Units == pantograph.Inch {
+		s := strconv.FormatFloat(mm/pantograph.MMPerInch, 'f', 4, 64)
+		return strings.TrimRight(strings.TrimRight(s, "0"), ".")
+	}
+	return trim(mm)
+}
+
+// depth formats a depth in the part's own units.
+func (l partLayout) depth(d pantograph.Depth) string {
+	if d.Through || d.MM == 0 {
+		return d.String()
+	}
+	return l.length(d.MM) + " " + map[bool]string{true: "in", false: "mm"}[l.part.Units == pantograph.Inch]
 }
