@@ -12,6 +12,7 @@ import (
 
 	"github.com/spf13/pflag"
 
+	"panto/export/dxf"
 	"panto/export/parttoml"
 	"panto/pantograph"
 	"panto/pantograph/drawing"
@@ -174,6 +175,24 @@ func writeFileAtomic(path string, data []byte) error {
 		os.Remove(tmp.Name())
 	}
 	return err
+}
+
+// makeDXFFiles returns the DXF files `panto make` writes into the output folder beside the
+// plate: template.dxf (outline, openings, seats, grooves and labels on their own layers, in
+// template mm, the laser kerf compensated when kerf > 0) and part.dxf (the part at true size).
+func makeDXFFiles(part pantograph.Part, p pantograph.Plan, kerf float64) ([]sheetFile, error) {
+	tmpl, err := dxf.TemplateDrawing(p, kerf)
+	if err != nil {
+		return nil, err
+	}
+	var t, pt bytes.Buffer
+	if err := dxf.Encode(&t, tmpl); err != nil {
+		return nil, err
+	}
+	if err := dxf.Encode(&pt, dxf.PartDrawing(part)); err != nil {
+		return nil, err
+	}
+	return []sheetFile{{name: "template.dxf", data: t.Bytes()}, {name: "part.dxf", data: pt.Bytes()}}, nil
 }
 
 // readPartOrDrawing reads a part file, or a DXF or SVG drawing with opts (its report going to

@@ -8,6 +8,7 @@ import (
 	"testing"
 
 	"panto/pantograph"
+	"panto/pantograph/drawing"
 	"panto/pantograph/partfile"
 )
 
@@ -133,5 +134,38 @@ func TestImportWritesPartFile(t *testing.T) {
 				t.Errorf("temporary files left behind: %v", left)
 			}
 		})
+	}
+}
+
+// TestMakeDXFFiles plans a drawing and checks that both DXF files read back: the template's
+// outline is the part's profile at the ratio, the part's at true size.
+func TestMakeDXFFiles(t *testing.T) {
+	part, _, err := drawing.ReadFile(drawings+"pump-port-plate.svg", drawing.Options{Thickness: 0.8})
+	if err != nil {
+		t.Fatal(err)
+	}
+	plan, err := pantograph.PlanPart(part, pantograph.Setup{Ratio: 10, Cutter: 0.5}, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	files, err := makeDXFFiles(part, plan, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(files) != 2 || files[0].name != "template.dxf" || files[1].name != "part.dxf" {
+		t.Fatalf("got %d files, want template.dxf and part.dxf", len(files))
+	}
+	ratio := map[string]float64{"template.dxf": 10, "part.dxf": 1}
+	for _, f := range files {
+		got, _, err := drawing.Read(f.name, f.data, drawing.Options{HoleMax: -1})
+		if err != nil {
+			t.Fatalf("%s: %v", f.name, err)
+		}
+		// Derived: areas scale with the square of the ratio; the stylus matches the cutter
+		// (10 × 0.5 = 5 mm), so the template needs no compensation.
+		want := part.Profile.Region.Area() * ratio[f.name] * ratio[f.name]
+		if a := got.Profile.Region.Area(); math.Abs(a-want) > 1e-6*want {
+			t.Errorf("%s: profile area %g, want %g", f.name, a, want)
+		}
 	}
 }
