@@ -83,14 +83,14 @@ type emitter struct {
 	layer string
 }
 
-func (em emitter) errf(format string, args ...any) error {
-	return &Error{File: em.r.file, Line: em.e.line, What: em.e.kind, Msg: fmt.Sprintf(format, args...)}
+func (o emitter) errf(format string, args ...any) error {
+	return &Error{File: o.r.file, Line: o.e.line, What: o.e.kind, Msg: fmt.Sprintf(format, args...)}
 }
 
 // add maps s through m and adds it.
-func (em emitter) add(m affine, s geom.Segment) error {
-	for _, t := range m.segment(s, em.r.tol) {
-		if err := em.addMapped(t); err != nil {
+func (o emitter) add(m affine, s geom.Segment) error {
+	for _, t := range m.segment(s, o.r.tol) {
+		if err := o.addMapped(t); err != nil {
 			return err
 		}
 	}
@@ -98,30 +98,30 @@ func (em emitter) add(m affine, s geom.Segment) error {
 }
 
 // addMapped adds a segment already in millimetres, dropping ones too short to matter.
-func (em emitter) addMapped(s geom.Segment) error {
+func (o emitter) addMapped(s geom.Segment) error {
 	if !s.A.IsFinite() || !s.B.IsFinite() || !s.Center.IsFinite() {
-		return em.errf("a coordinate is too large to be a drawing of a part")
+		return o.errf("a coordinate is too large to be a drawing of a part")
 	}
 	if s.A == s.B && !s.IsArc() {
 		return nil
 	}
-	if len(em.r.sheet.Items) >= maxSegments {
-		return em.errf("more than %d segments: this drawing is far larger than any part panto makes", maxSegments)
+	if len(o.r.sheet.Items) >= maxSegments {
+		return o.errf("more than %d segments: this drawing is far larger than any part panto makes", maxSegments)
 	}
-	it := Item{Seg: s, Layer: em.layer, Line: em.e.line, What: em.e.kind}
-	if v := em.r.via; v != nil {
+	it := Item{Seg: s, Layer: o.layer, Line: o.e.line, What: o.e.kind}
+	if v := o.r.via; v != nil {
 		// The user finds an inserted block by its INSERT, not by the block's definition.
-		it.Line, it.What = v.line, fmt.Sprintf("%s of INSERT %q", em.e.kind, v.str(2))
+		it.Line, it.What = v.line, fmt.Sprintf("%s of INSERT %q", o.e.kind, v.str(2))
 	}
-	em.r.sheet.Items = append(em.r.sheet.Items, it)
+	o.r.sheet.Items = append(o.r.sheet.Items, it)
 	return nil
 }
 
 // nums reads the numbers with the given codes, defaulting to 0.
-func (em emitter) nums(codes ...int) ([]float64, error) {
+func (o emitter) nums(codes ...int) ([]float64, error) {
 	out := make([]float64, len(codes))
 	for i, c := range codes {
-		v, err := em.e.num(em.r.file, c, 0)
+		v, err := o.e.num(o.r.file, c, 0)
 		if err != nil {
 			return nil, err
 		}
@@ -183,7 +183,7 @@ type vertex struct {
 }
 
 // polySegments adds the segments of a polyline through vs, closed when closed.
-func (em emitter) polySegments(m affine, vs []vertex, closed bool) error {
+func (o emitter) polySegments(m affine, vs []vertex, closed bool) error {
 	n := len(vs) - 1
 	if closed {
 		n = len(vs)
@@ -193,7 +193,7 @@ func (em emitter) polySegments(m affine, vs []vertex, closed bool) error {
 		if a.p.Near(b.p) {
 			continue
 		}
-		if err := em.add(m, bulgeSegment(a.p, b.p, a.bulge)); err != nil {
+		if err := o.add(m, bulgeSegment(a.p, b.p, a.bulge)); err != nil {
 			return err
 		}
 	}

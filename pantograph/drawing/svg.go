@@ -125,7 +125,10 @@ func (r *svgReader) start(t xml.StartElement, line int) error {
 		r.stack = append(r.stack, f)
 		return nil
 	}
-	if notDrawn[name] {
+	if notDrawn[name] || hidden(t) {
+		if hidden(t) {
+			name += " hidden"
+		}
 		r.sheet.skip("<" + name + ">")
 		f.skip = true
 		r.stack = append(r.stack, f)
@@ -152,6 +155,16 @@ func (r *svgReader) start(t xml.StartElement, line int) error {
 	}
 	r.stack = append(r.stack, f)
 	return r.shape(t, f, line)
+}
+
+// hidden reports whether an element is not displayed (display="none", also in its style), as
+// drawing programs write hidden layers: what the user does not see is not part of the part.
+func hidden(t xml.StartElement) bool {
+	if attr(t, "display") == "none" {
+		return true
+	}
+	style := strings.ReplaceAll(attr(t, "style"), " ", "")
+	return strings.Contains(";"+style, ";display:none")
 }
 
 // svgNS is the SVG namespace; elements of other namespaces (editor metadata) are not drawn.

@@ -174,6 +174,7 @@ func TestReadSVGLayers(t *testing.T) {
 	src := svgDoc(`width="100mm" height="100mm" viewBox="0 0 100 100"`, `<rect width="100" height="100"/>
 <g id="recess"><rect x="10" y="10" width="20" height="20"/></g>
 <g id="notes"><line x1="0" y1="0" x2="5" y2="5"/></g>
+<g style="fill:none; display:none"><rect x="40" y="40" width="5" height="5"/></g>
 <text x="1" y="1">hello</text>`)
 	p, rep, err := Read("t.svg", []byte(src), Options{Layers: map[string]LayerRule{
 		"recess": {Kind: pantograph.KindPocket, Depth: 0.5}, "notes": {Ignore: true}}})
@@ -183,8 +184,8 @@ func TestReadSVGLayers(t *testing.T) {
 	if k := kinds(p); k[pantograph.KindPocket] != 1 || len(p.Features) != 1 {
 		t.Errorf("got %v, want one pocket", k)
 	}
-	if !strings.Contains(rep.Skipped, "1 <text>") {
-		t.Errorf("got skipped %q, want 1 <text>", rep.Skipped)
+	if !strings.Contains(rep.Skipped, "1 <text>") || !strings.Contains(rep.Skipped, "1 <g hidden>") {
+		t.Errorf("got skipped %q, want 1 <text> and 1 <g hidden>", rep.Skipped)
 	}
 }
 
