@@ -417,20 +417,20 @@ func readRootSize(t xml.StartElement) (rootSize, error) {
 
 // scales returns millimetres per user unit along x and y: CSS px without a viewBox, else the
 // viewport's size over the viewBox's (a missing width or height follows the other).
-func (sz rootSize) scales() (float64, float64) {
+func (z rootSize) scales() (float64, float64) {
 	kx, ky := 25.4/96, 25.4/96
-	if sz.vb == nil {
+	if z.vb == nil {
 		return kx, ky
 	}
-	if sz.w > 0 {
-		kx = sz.w * unitMM(sz.wu) / sz.vb[2]
+	if z.w > 0 {
+		kx = z.w * unitMM(z.wu) / z.vb[2]
 	}
-	if sz.h > 0 {
-		ky = sz.h * unitMM(sz.hu) / sz.vb[3]
+	if z.h > 0 {
+		ky = z.h * unitMM(z.hu) / z.vb[3]
 	}
-	if sz.w > 0 && sz.h == 0 {
+	if z.w > 0 && z.h == 0 {
 		ky = kx
-	} else if sz.h > 0 && sz.w == 0 {
+	} else if z.h > 0 && z.w == 0 {
 		kx = ky
 	}
 	return kx, ky
