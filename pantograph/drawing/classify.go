@@ -327,7 +327,11 @@ func (k *classifier) opening(o outline, count map[pantograph.Kind]int) {
 		k.rep.Warnings = append(k.rep.Warnings, fmt.Sprintf("%s is a second outline on the profile layer: made a cut-out", k.from(o)))
 	}
 	count[kind]++
-	f := pantograph.Feature{Kind: kind, Name: fmt.Sprintf("%s %d", kind, count[kind]),
+	name := fmt.Sprintf("%s %d", kind, count[kind])
+	if o.first.Name != "" {
+		name = o.first.Name // the drawing's own name for it, an SVG id
+	}
+	f := pantograph.Feature{Kind: kind, Name: name,
 		Region: geom.NewRegion(o.c), Depth: depth, Where: k.where(o.first)}
 	k.part.Features = append(k.part.Features, f)
 	size := o.c.Bounds().Size()

@@ -15,6 +15,7 @@ type Item struct {
 	Layer string // the DXF layer or the SVG group it was drawn in; "" when none
 	Line  int    // line in the file of the entity or element it came from
 	What  string // the entity or element, e.g. "LWPOLYLINE" or "<path>", for messages
+	Name  string // the SVG element's id, which names the feature it becomes; "" when none
 }
 
 // Sheet is what a reader found in a file: the segments and what it had to decide or skip.

@@ -191,7 +191,7 @@ func (r *svgReader) shape(t xml.StartElement, f svgFrame, line int) error {
 		if len(r.sheet.Items) >= maxSegments {
 			return &Error{File: r.file, Line: line, What: what, Msg: fmt.Sprintf("more than %d segments: far larger than any part", maxSegments)}
 		}
-		r.sheet.Items = append(r.sheet.Items, Item{Seg: s, Layer: f.layer, Line: line, What: what})
+		r.sheet.Items = append(r.sheet.Items, Item{Seg: s, Layer: f.layer, Line: line, What: what, Name: attr(t, "id")})
 	}
 	return nil
 }

@@ -182,7 +182,10 @@ func TestReadSVGLayers(t *testing.T) {
 		t.Fatal(err)
 	}
 	if k := kinds(p); k[pantograph.KindPocket] != 1 || len(p.Features) != 1 {
-		t.Errorf("got %v, want one pocket", k)
+		t.Fatalf("got %v, want one pocket", k)
+	}
+	if p.Features[0].Name != "pocket 1" {
+		t.Errorf("got name %q, want the default pocket 1 (the rect has no id)", p.Features[0].Name)
 	}
 	if !strings.Contains(rep.Skipped, "1 <text>") || !strings.Contains(rep.Skipped, "1 <g hidden>") {
 		t.Errorf("got skipped %q, want 1 <text> and 1 <g hidden>", rep.Skipped)
@@ -218,5 +221,17 @@ func TestReadSVGErrors(t *testing.T) {
 				t.Errorf("got line %d, want %d", de.Line, tc.line)
 			}
 		})
+	}
+}
+
+func TestReadSVGIdNamesFeature(t *testing.T) {
+	src := svgDoc(`width="100mm" height="100mm" viewBox="0 0 100 100"`,
+		`<rect width="100" height="100"/><rect id="window" x="10" y="10" width="20" height="20"/>`)
+	p, _, err := Read("t.svg", []byte(src), Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(p.Features) != 1 || p.Features[0].Name != "window" {
+		t.Errorf("got %+v, want one feature named window", p.Features)
 	}
 }
