@@ -200,8 +200,8 @@ func TestSpansMatchSampling(t *testing.T) {
 		}
 		o, n, w := rnd(), rnd(), rnd()
 		kk, r := 3*rng.Float64()-1, 4*rng.Float64()
-		hp := halfPlaneSpans(nil, s, o, n, kk)
-		dc := discSpans(nil, s, w, r)
+		hp := halfPlaneSpans(nil, newCurve(s), o, n, kk)
+		dc := discSpans(nil, newCurve(s), w, r)
 		for u := 0.0005; u < 1; u += 0.001 {
 			p := s.At(u)
 			inHP, inDisc := p.Sub(o).Dot(n) < kk, p.Dist(w) < r

@@ -73,8 +73,24 @@ func subtractSpans(out, a, cut spans) spans {
 	return out
 }
 
+// curve is a segment with the numbers the span functions need of an arc worked out once:
+// they are asked about one segment many times.
+type curve struct {
+	Segment
+	radius, start float64 // of an arc
+}
+
+// newCurve returns s as a curve.
+func newCurve(s Segment) curve {
+	c := curve{Segment: s}
+	if s.IsArc() {
+		c.radius, c.start = s.Radius(), s.StartAngle()
+	}
+	return c
+}
+
 // halfPlaneSpans appends the spans of s whose points p satisfy (p − o)·n < k.
-func halfPlaneSpans(out spans, s Segment, o, n Vec, k float64) spans {
+func halfPlaneSpans(out spans, s curve, o, n Vec, k float64) spans {
 	if !s.IsArc() {
 		a := s.B.Sub(s.A).Dot(n)
 		b := s.A.Sub(o).Dot(n) - k // the condition is b + a·t < 0
@@ -97,7 +113,7 @@ func halfPlaneSpans(out spans, s Segment, o, n Vec, k float64) spans {
 		}
 		return out
 	}
-	kappa := (k - s.Center.Sub(o).Dot(n)) / (s.Radius() * l)
+	kappa := (k - s.Center.Sub(o).Dot(n)) / (s.radius * l)
 	switch {
 	case kappa > 1:
 		return append(out, whole)
@@ -110,8 +126,8 @@ func halfPlaneSpans(out spans, s Segment, o, n Vec, k float64) spans {
 // cosBelowSpans appends the spans of arc s where the direction from the centre lies more than
 // alpha (0 ≤ alpha ≤ π) from direction psi, that is where x = angle − psi lies in
 // (alpha, 2π − alpha) modulo 2π.
-func cosBelowSpans(out spans, s Segment, psi, alpha float64) spans {
-	x0 := s.StartAngle() - psi
+func cosBelowSpans(out spans, s curve, psi, alpha float64) spans {
+	x0 := s.start - psi
 	xs, xe := x0, x0+s.Sweep
 	if s.Sweep < 0 {
 		xs, xe = xe, xs
@@ -134,7 +150,7 @@ func cosBelowSpans(out spans, s Segment, psi, alpha float64) spans {
 }
 
 // discSpans appends the spans of s that lie strictly within r of w.
-func discSpans(out spans, s Segment, w Vec, r float64) spans {
+func discSpans(out spans, s curve, w Vec, r float64) spans {
 	if !s.IsArc() {
 		dir, v := s.B.Sub(s.A), s.A.Sub(w)
 		qa, qb, qc := dir.Dot(dir), v.Dot(dir), v.Dot(v)-r*r
@@ -149,6 +165,5 @@ func discSpans(out spans, s Segment, w Vec, r float64) spans {
 	// half-plane q·(−w') < −(R² + |w'|² − r²)/2.
 	c := s.Center
 	wc := w.Sub(c)
-	rad := s.Radius()
-	return halfPlaneSpans(out, s, c, wc.Neg(), -(rad*rad+wc.Dot(wc)-r*r)/2)
+	return halfPlaneSpans(out, s, c, wc.Neg(), -(s.radius*s.radius+wc.Dot(wc)-r*r)/2)
 }
