@@ -17,7 +17,7 @@ func (b sheetBuilder) rows() []SheetRow {
 		switch st.What {
 		case StepDatum:
 			out = append(out, SheetRow{What: StepDatum, Where: b.at(geom.Vec{}),
-				Action: "put the stylus in the datum seat; set each dial to its datum reading; touch the cutter on the top face and zero the depth dial"})
+				Action: "put the stylus on the datum (in its seat, where the template has one); set each dial to its datum reading; touch the cutter on the top face and zero the depth dial"})
 		case StepDrill:
 			out = append(out, b.drillRows(st)...)
 		default:
