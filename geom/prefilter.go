@@ -36,10 +36,11 @@ import (
 // snapTol leaves a wide margin and is still far below an edge of the densest outline.
 const prefilterMargin = 10 * snapTol
 
-// prefilterWindow is how many segments on each side along the contour are tried as witnesses
-// before any search. On a jagged outline the neighbours a few edges away already cover all of
-// a join arc but its crown; measured on the 100k-vertex star, 2 left twice the pieces of 3,
-// and 5 cost more than it saved.
+// prefilterWindow is how many segments on each side along the contour a long raw curve is
+// tried against before any search. On a jagged outline the neighbours a few edges away already
+// cover all of a join arc but its crown. On the 10k-vertex star 2, 3 and 5 timed the same
+// within the noise of a shared machine; 3 leaves room for a corner whose nearest neighbours
+// lie lower than it.
 const prefilterWindow = 3
 
 // prefilterShortWindow is prefilterWindow for curves too short to be worth a search (see
