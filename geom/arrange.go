@@ -1,8 +1,9 @@
 package geom
 
 import (
+	"cmp"
 	"math"
-	"sort"
+	"slices"
 )
 
 // This file cuts contours into pieces where they meet and joins chosen pieces back into
@@ -41,15 +42,14 @@ func splitPieces(groups [][]Segment) []piece {
 	for i, p := range segs {
 		boxes[i] = p.seg.Bounds().Expand(snapTol)
 	}
-	for _, pr := range boxPairs(boxes) {
-		i, j := pr[0], pr[1]
+	eachBoxPair(boxes, func(i, j int) {
 		for _, x := range intersect(segs[i].seg, segs[j].seg) {
 			cuts[i] = append(cuts[i], crossingAt{x.ta, x.at})
 			cuts[j] = append(cuts[j], crossingAt{x.tb, x.at})
 		}
-	}
+	})
 	snap := newSnapper()
-	var out []piece
+	out := make([]piece, 0, len(segs)+len(segs)/2)
 	for i, p := range segs {
 		for _, s := range cutAt(p.seg, cuts[i]) {
 			s.A, s.B = snap.point(s.A), snap.point(s.B)
@@ -71,7 +71,7 @@ type crossingAt struct {
 // cutAt returns s cut at the given crossings, in order along s. Cuts at the ends, or closer
 // than snapTol to another cut, change nothing.
 func cutAt(s Segment, cuts []crossingAt) []Segment {
-	sort.Slice(cuts, func(a, b int) bool { return cuts[a].t < cuts[b].t })
+	slices.SortFunc(cuts, func(a, b crossingAt) int { return cmp.Compare(a.t, b.t) })
 	var out []Segment
 	t0, a := 0.0, s.A
 	for _, c := range cuts {
@@ -88,31 +88,75 @@ func cutAt(s Segment, cuts []crossingAt) []Segment {
 	return append(out, last)
 }
 
-// snapper merges points closer than snapTol into the first of them seen, using a hash grid
-// so that it costs O(1) a point.
+// eachBoxPair calls f(i, j), i < j, for every pair of boxes that overlap, by sorting on the
+// left edge and sweeping: O(n log n + pairs), and no list of pairs to allocate.
+func eachBoxPair(boxes []Box, f func(i, j int)) {
+	idx := make([]int32, len(boxes))
+	for i := range idx {
+		idx[i] = int32(i)
+	}
+	slices.SortFunc(idx, func(a, b int32) int { return cmp.Compare(boxes[a].Min.X, boxes[b].Min.X) })
+	var active []int32
+	for _, i := range idx {
+		keep := active[:0]
+		for _, j := range active {
+			if boxes[j].Max.X >= boxes[i].Min.X {
+				keep = append(keep, j)
+			}
+		}
+		active = keep
+		for _, j := range active {
+			if boxes[i].Overlaps(boxes[j]) {
+				f(int(min(i, j)), int(max(i, j)))
+			}
+		}
+		active = append(active, i)
+	}
+}
+
+// snapper merges points closer than snapTol into one seen earlier, using a hash grid so that
+// it costs O(1) a point.
 type snapper struct {
 	cells map[[2]int64][]Vec
 }
 
-func newSnapper() *snapper { return &snapper{cells: map[[2]int64][]Vec{}} }
+// snapCell is the side of a snapper's grid cell. A point needs to look into a neighbouring
+// cell only when it lies within snapTol of that side, so at 16 snapTol most points look into
+// their own cell alone, where at 4 snapTol they looked into all nine about it.
+const snapCell = 16 * snapTol
 
-func (s *snapper) cell(p Vec) [2]int64 {
-	const size = 4 * snapTol
-	return [2]int64{int64(math.Floor(p.X / size)), int64(math.Floor(p.Y / size))}
-}
+func newSnapper() *snapper { return &snapper{cells: map[[2]int64][]Vec{}} }
 
 // point returns the representative of p: an earlier point within snapTol, or p itself.
 func (s *snapper) point(p Vec) Vec {
-	c := s.cell(p)
-	for dx := int64(-1); dx <= 1; dx++ {
-		for dy := int64(-1); dy <= 1; dy++ {
-			for _, q := range s.cells[[2]int64{c[0] + dx, c[1] + dy}] {
+	fx, fy := math.Floor(p.X/snapCell), math.Floor(p.Y/snapCell)
+	cx, cy := int64(fx), int64(fy)
+	x0, x1 := snapReach(p.X, fx)
+	y0, y1 := snapReach(p.Y, fy)
+	for dx := x0; dx <= x1; dx++ {
+		for dy := y0; dy <= y1; dy++ {
+			for _, q := range s.cells[[2]int64{cx + dx, cy + dy}] {
 				if q.Dist(p) <= snapTol {
 					return q
 				}
 			}
 		}
 	}
+	c := [2]int64{cx, cy}
 	s.cells[c] = append(s.cells[c], p)
 	return p
+}
+
+// snapReach returns which neighbouring cells along one axis (−1, 0, +1) can hold a point within
+// snapTol of coordinate v, whose cell starts at f·snapCell. It errs towards looking: a margin
+// of a tenth of snapTol covers the rounding of the division.
+func snapReach(v, f float64) (lo, hi int64) {
+	off := v - f*snapCell
+	if off < 1.1*snapTol {
+		lo = -1
+	}
+	if snapCell-off < 1.1*snapTol {
+		hi = 1
+	}
+	return lo, hi
 }
