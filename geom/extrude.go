@@ -56,9 +56,8 @@ func (r Region) Extrude(z0, z1, tol float64) (Mesh, error) {
 }
 
 // StepSolid returns the closed mesh of the stepped solid that stands on height base and whose
-// outermost terrace is root, every arc flattened to chords within tol (tol > 0). Points
-// closer together along an outline than tol/2 are merged and points on a straight run are
-// dropped; either moves the surface by less than tol.
+// outermost terrace is root, every outline within tol (tol > 0) of the exact one: see
+// ringPoints.
 func StepSolid(base float64, root Terrace, tol float64) (Mesh, error) {
 	if !(tol > 0) {
 		return Mesh{}, fmt.Errorf("%w: chord tolerance must be greater than 0, got %g", ErrBadTerrace, tol)
@@ -154,7 +153,7 @@ func (b *solidBuilder) terrace(t Terrace, ring flatRing, name string) error {
 
 // ring flattens c into a counter-clockwise ring of distinct points.
 func (b *solidBuilder) ring(c Contour) (flatRing, error) {
-	pts := cleanRing(c.Flatten(b.tol), b.tol/2)
+	pts := ringPoints(c, b.tol)
 	if len(pts) < 3 {
 		return flatRing{}, fmt.Errorf("%w: outline has no area at tolerance %g", ErrBadTerrace, b.tol)
 	}
@@ -256,9 +255,27 @@ func (b *solidBuilder) cap(outer flatRing, holes []flatRing, z float64, below bo
 	return nil
 }
 
-// cleanRing drops points nearer than minGap to the last point kept, and points on a straight
-// run between their neighbours, from the closed polygon pts.
-func cleanRing(pts []Vec, minGap float64) []Vec {
+// Shares of the tolerance of an outline's ring: chords take most of it; merging points closer
+// than a tenth of it and dropping points less than a tenth of it off the line through their
+// neighbours take the rest, so the ring stays within tol of the outline. Dropping such points
+// also keeps out slivers so thin that rounding corners to float32 (as STL files do) could
+// turn them over.
+const (
+	chordShare    = 0.8
+	mergeShare    = 0.1
+	straightShare = 0.1
+)
+
+// ringPoints flattens c into a closed polygon within tol of it, without points closer than
+// mergeShare·tol to the one before or nearer than straightShare·tol to the line through their
+// neighbours.
+func ringPoints(c Contour, tol float64) []Vec {
+	return cleanRing(c.Flatten(chordShare*tol), mergeShare*tol, straightShare*tol)
+}
+
+// cleanRing drops points nearer than minGap to the last point kept, and points within maxDev
+// of the straight line between their neighbours, from the closed polygon pts.
+func cleanRing(pts []Vec, minGap, maxDev float64) []Vec {
 	out := make([]Vec, 0, len(pts))
 	for _, p := range pts {
 		if len(out) > 0 && p.Dist(out[len(out)-1]) < minGap {
@@ -278,7 +295,7 @@ func cleanRing(pts []Vec, minGap float64) []Vec {
 			if len(kept) > 0 {
 				a = kept[len(kept)-1]
 			}
-			if straight(a, p, out[(k+1)%n]) {
+			if straight(a, p, out[(k+1)%n], maxDev) {
 				changed = true
 				continue
 			}
@@ -289,13 +306,11 @@ func cleanRing(pts []Vec, minGap float64) []Vec {
 	return out
 }
 
-// straight reports whether b lies on the line a-c between them, to within rounding.
-func straight(a, b, c Vec) bool {
+// straight reports whether b lies within maxDev of the segment a-c, between its ends.
+func straight(a, b, c Vec, maxDev float64) bool {
 	d := c.Sub(a)
-	l2 := d.Dot(d)
-	// 1e-12 of the run's length squared: the distance from the line is then 1e-6 of the run
-	// at most, so dropping b moves the outline far less than any chord tolerance.
-	return math.Abs(d.Cross(b.Sub(a))) <= 1e-12*l2 && b.Sub(a).Dot(d) > 0 && c.Sub(b).Dot(d) > 0
+	l := d.Len()
+	return l > 0 && math.Abs(d.Cross(b.Sub(a))) <= maxDev*l && b.Sub(a).Dot(d) > 0 && c.Sub(b).Dot(d) > 0
 }
 
 // ringArea returns the signed area of the closed polygon pts.

@@ -14,9 +14,9 @@ const meshTol = 1e-9
 
 // flatArea returns the area of region r as StepSolid flattens it.
 func flatArea(r Region, tol float64) float64 {
-	a := math.Abs(ringArea(cleanRing(r.Outer.Flatten(tol), tol/2)))
+	a := math.Abs(ringArea(ringPoints(r.Outer, tol)))
 	for _, h := range r.Holes {
-		a -= math.Abs(ringArea(cleanRing(h.Flatten(tol), tol/2)))
+		a -= math.Abs(ringArea(ringPoints(h, tol)))
 	}
 	return a
 }
@@ -46,7 +46,7 @@ func TestExtrude(t *testing.T) {
 			}
 			v := 0
 			for _, c := range tc.region.Contours() {
-				v += len(cleanRing(c.Flatten(tol), tol/2))
+				v += len(ringPoints(c, tol))
 			}
 			h := len(tc.region.Holes)
 			// derived: caps 2·(V + 2h − 2), walls 2·V.

@@ -128,11 +128,29 @@ func (t *earCutter) link(r []Vec, start int) *ringNode {
 // orient returns twice the signed area of triangle a, b, c: positive when it turns left.
 func orient(a, b, c Vec) float64 { return b.Sub(a).Cross(c.Sub(a)) }
 
+// earMinArea is the least area, in mm², of a triangle cut as an ear: four times the area Mesh
+// counts as none, so that rounding of the corners (to float32 in a file, too) cannot flatten
+// an ear that passed. A corner turning less than that is treated as straight.
+const earMinArea = 4 * minTriangleArea
+
+// earMinHeight is the least height, in mm, of a triangle cut as an ear, over its longest side:
+// twice the spacing of float32 numbers near 1000 (6.1e-5 mm), so that the corners of a plate up
+// to a metre across, rounded to float32 in an STL file, cannot turn the triangle over.
+const earMinHeight = 1e-4
+
+// convex reports whether the ring turns left at b by more than a straight run's rounding: the
+// triangle a, b, c has at least earMinArea and is at least earMinHeight high over every side.
+func convex(a, b, c Vec) bool {
+	o := orient(a, b, c)
+	long := math.Max(a.Dist(b), math.Max(b.Dist(c), c.Dist(a)))
+	return o > 2*earMinArea && o > earMinHeight*long
+}
+
 // isEar reports whether the corner at e can be cut off: it turns left and no reflex point of the
 // ring lies in the triangle.
 func (t *earCutter) isEar(e *ringNode) bool {
 	a, b, c := e.prev, e, e.next
-	if orient(a.p, b.p, c.p) <= 0 {
+	if !convex(a.p, b.p, c.p) {
 		return false
 	}
 	if t.invSize > 0 {
@@ -152,7 +170,7 @@ func blocks(a, b, c, p *ringNode) bool {
 	if p == a || p == b || p == c || p.p == a.p || p.p == c.p {
 		return false
 	}
-	return inTriangle(a.p, b.p, c.p, p.p) && orient(p.prev.p, p.p, p.next.p) <= 0
+	return inTriangle(a.p, b.p, c.p, p.p) && !convex(p.prev.p, p.p, p.next.p)
 }
 
 // inTriangle reports whether p lies in the counter-clockwise triangle a, b, c or on its edges.
@@ -639,9 +657,9 @@ func pointsOn(pts []Vec, u, v int32, cand []int32) []int32 {
 		}
 		p := pts[i]
 		s := p.Sub(a).Dot(d) / l2
-		// Straight within 1e-9 of the run's length squared: the remnants come from exactly
-		// collinear input (axis-parallel runs), never from near misses of real corners.
-		if s <= 0 || s >= 1 || math.Abs(d.Cross(p.Sub(a))) > 1e-9*l2 {
+		// Straight as convex judges it: the remnants are runs whose corners turn too little
+		// to be cut as ears.
+		if s <= 0 || s >= 1 || math.Abs(d.Cross(p.Sub(a))) > 2*earMinArea+earMinHeight*math.Sqrt(l2) {
 			continue
 		}
 		seen[i] = true

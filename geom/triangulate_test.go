@@ -123,9 +123,9 @@ func TestTriangulateRandom(t *testing.T) {
 	for seed := int64(1); seed <= 300; seed++ {
 		t.Run(fmt.Sprint("seed ", seed), func(t *testing.T) {
 			r := randomRegion(rand.New(rand.NewSource(seed)))
-			rings := [][]Vec{cleanRing(r.Outer.Flatten(0.01), 0.005)}
+			rings := [][]Vec{ringPoints(r.Outer, 0.01)}
 			for _, h := range r.Holes {
-				rings = append(rings, cleanRing(h.Flatten(0.01), 0.005))
+				rings = append(rings, ringPoints(h, 0.01))
 			}
 			tris, err := Triangulate(rings)
 			if err != nil {

@@ -6,6 +6,8 @@ import (
 	"path/filepath"
 	"testing"
 
+	hstl "github.com/hschendel/stl"
+
 	"panto/geom"
 	"panto/pantograph"
 	"panto/pantograph/partfile"
@@ -71,6 +73,21 @@ func checkPlateMesh(t *testing.T, pl pantograph.Plate) geom.Mesh {
 	}
 	if got, want := hi.Z, pl.Height; got != want {
 		t.Errorf("height: got %g, want %g", got, want)
+	}
+	// Written to a file the corners become float32: the STL library's own check must still
+	// find every edge paired and every normal matching its corners. (export/stl makes the
+	// same solid; the test builds it here because pantograph does not import export.)
+	s := &hstl.Solid{}
+	f32 := func(p geom.Vec3) hstl.Vec3 { return hstl.Vec3{float32(p.X), float32(p.Y), float32(p.Z)} }
+	for i := range m.Triangles {
+		a, b, c := m.Corners(i)
+		s.Triangles = append(s.Triangles, hstl.Triangle{Normal: f32(m.Normal(i)), Vertices: [3]hstl.Vec3{f32(a), f32(b), f32(c)}})
+	}
+	if errs := s.Validate(); len(errs) != 0 {
+		for i, e := range errs {
+			t.Errorf("written triangle %d %v: %+v", i, s.Triangles[i].Vertices, *e)
+			break
+		}
 	}
 	return m
 }

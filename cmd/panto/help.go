@@ -15,6 +15,7 @@ Usage:
   panto stylus --ratio R --cutter D [...]     the stylus for a cutter, or the cutter for a stylus
   panto import DRAWING [-o PART.toml] [...]   make a part file from a DXF or SVG drawing
   panto sheet PART --ratio R --cutter D [...] write the dial-reading sheet (PDF, text, CSV, JSON)
+  panto make PART --ratio R --cutter D -o DIR write the template plate (STL), sheet and drawings
   panto help [COMMAND]                        show this help, or a command's help
   panto --version                             show panto's version
 
@@ -112,6 +113,8 @@ func runHelp(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stdout, importUsage, drawing.DefaultHoleMaxMM)
 	case args[0] == "sheet":
 		fmt.Fprint(stdout, sheetUsage)
+	case args[0] == "make":
+		fmt.Fprint(stdout, makeUsage)
 	default:
 		fmt.Fprintf(stderr, "panto: no help for %q: there is no such command\n", args[0])
 		return exitUsage

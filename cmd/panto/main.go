@@ -39,6 +39,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return runPlan(rest, stdout, stderr)
 	case "sheet":
 		return runSheet(rest, stdout, stderr)
+	case "make":
+		return runMake(rest, stdout, stderr)
 	case "stylus":
 		return runStylus(rest, stdout, stderr)
 	case "import":
