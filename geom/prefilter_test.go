@@ -10,16 +10,30 @@ import (
 // jumps at random by up to jump times an edge length at every vertex, with up to one jagged
 // hole: the dense, noisy outlines the prefilter is for.
 func jaggedRegion(rng *rand.Rand, n int, jump float64) Region {
+	return jaggedRounded(rng, n, jump, 0)
+}
+
+// jaggedRounded is jaggedRegion with every third corner rounded with radius round times an
+// edge length, so that the raw curves meet arcs of the outline as well as lines.
+func jaggedRounded(rng *rand.Rand, n int, jump, round float64) Region {
 	star := func(c Vec, m int, r float64) Contour {
 		edge := 2 * math.Pi * r / float64(m)
 		lobes, phase := 2+rng.Intn(5), 2*math.Pi*rng.Float64()
 		pts := make([]Vec, m)
+		radii := make([]float64, m)
 		for i := range pts {
 			a := 2 * math.Pi * float64(i) / float64(m)
 			rr := r*(1+0.15*math.Sin(float64(lobes)*a+phase)) + jump*edge*(rng.Float64()-0.5)
 			pts[i] = Polar(c, rr, a)
+			if i%3 == 0 {
+				radii[i] = round * edge
+			}
 		}
-		return Polygon(pts...)
+		ct, err := RoundedPolygon(pts, radii)
+		if err != nil {
+			panic(err) // the radii are far below what any corner allows
+		}
+		return ct
 	}
 	if rng.Intn(2) == 0 {
 		return NewRegion(star(Vec{}, n, 20))
@@ -75,6 +89,10 @@ func TestPrefilterKeepsOffset(t *testing.T) {
 		for _, d := range ds {
 			samePrefiltered(t, label+" jagged", jr, d)
 		}
+		rr := jaggedRounded(rng, 300+rng.Intn(500), 1+3*rng.Float64(), 0.02+0.1*rng.Float64())
+		for _, d := range ds {
+			samePrefiltered(t, label+" jagged rounded", rr, d)
+		}
 	}
 }
 
@@ -91,6 +109,7 @@ func TestPrefilterFineOutlines(t *testing.T) {
 		{"wavy", benchBlob(t, 1000, 0.01)},
 		{"wavy rough", benchBlob(t, 1000, 0.5)},
 		{"jagged", benchJagged(1000)},
+		{"jagged 10k", benchJagged(10_000)},
 		{"roughened", rough},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
@@ -226,4 +245,38 @@ func inSpans(ss spans, t float64) bool {
 		}
 	}
 	return false
+}
+
+func TestCoverMatchesDistance(t *testing.T) {
+	// The cover of a witness is exactly the part of a curve nearer than rho to it (derived: the
+	// points within rho of a line or an arc are the discs about its ends and the rectangle or
+	// ring sector beside it), checked at many points of random lines and arcs against random
+	// line and arc witnesses, arcs of more than half a turn and full circles among them.
+	const seed = 8
+	rng := rand.New(rand.NewSource(seed))
+	rnd := func() Vec { return V(6*rng.Float64()-3, 6*rng.Float64()-3) }
+	seg := func(k int) Segment {
+		switch k % 3 {
+		case 0:
+			return Line(rnd(), rnd())
+		case 1:
+			return Arc(rnd(), 0.3+2*rng.Float64(), 7*rng.Float64(), (4*rng.Float64()-2)*math.Pi)
+		}
+		return Circle(rnd(), 0.3+2*rng.Float64())[0]
+	}
+	for k := 0; k < 600; k++ {
+		s, w := seg(k), seg(k/3)
+		f := &prefilter{rho: 0.2 + 2*rng.Float64()}
+		cov := append(spans(nil), f.coverOf(newCurve(s), w)...)
+		for u := 0.0005; u < 1; u += 0.001 {
+			dist := w.DistanceTo(s.At(u))
+			if math.Abs(dist-f.rho) < 1e-6 {
+				continue // on the edge of the cover, within rounding
+			}
+			if got, want := inSpans(cov, u), dist < f.rho; got != want {
+				t.Fatalf("seed %d case %d: %v at t %g is %.9g from %v: covered %v, want %v (rho %g, %v)",
+					seed, k, s, u, dist, w, got, want, f.rho, cov)
+			}
+		}
+	}
 }
