@@ -37,21 +37,23 @@ func splitPieces(groups [][]Segment) []piece {
 			}
 		}
 	}
-	cuts := make([][]crossingAt, len(segs))
 	boxes := make([]Box, len(segs))
 	for i, p := range segs {
 		boxes[i] = p.seg.Bounds().Expand(snapTol)
 	}
+	var found []pairCrossing
 	eachBoxPair(boxes, func(i, j int) {
 		for _, x := range intersect(segs[i].seg, segs[j].seg) {
-			cuts[i] = append(cuts[i], crossingAt{x.ta, x.at})
-			cuts[j] = append(cuts[j], crossingAt{x.tb, x.at})
+			found = append(found, pairCrossing{int32(i), int32(j), x})
 		}
 	})
-	snap := newSnapper()
-	out := make([]piece, 0, len(segs)+len(segs)/2)
+	first, cuts := cutsBySegment(len(segs), found)
+	snap := newSnapper(len(segs) + len(found))
+	out := make([]piece, 0, len(segs)+2*len(found))
+	var sub []Segment
 	for i, p := range segs {
-		for _, s := range cutAt(p.seg, cuts[i]) {
+		sub = cutAt(sub[:0], p.seg, cuts[first[i]:first[i+1]])
+		for _, s := range sub {
 			s.A, s.B = snap.point(s.A), snap.point(s.B)
 			if s.A.Near(s.B) && !(s.IsArc() && math.Abs(s.Sweep) > math.Pi) {
 				continue
@@ -62,17 +64,45 @@ func splitPieces(groups [][]Segment) []piece {
 	return out
 }
 
+// pairCrossing is a crossing found between segments i and j.
+type pairCrossing struct {
+	i, j int32
+	x    crossing
+}
+
+// cutsBySegment sorts the crossings into the cuts of each of n segments: segment i's are
+// cuts[first[i]:first[i+1]], in the order the crossings were found. Two passes over one
+// array, where a slice per segment grown by appends cost an allocation per crossing.
+func cutsBySegment(n int, found []pairCrossing) (first []int32, cuts []crossingAt) {
+	first = make([]int32, n+1)
+	for _, f := range found {
+		first[f.i+1]++
+		first[f.j+1]++
+	}
+	for k := 1; k <= n; k++ {
+		first[k] += first[k-1]
+	}
+	fill := append([]int32(nil), first[:n]...)
+	cuts = make([]crossingAt, 2*len(found))
+	for _, f := range found {
+		cuts[fill[f.i]] = crossingAt{f.x.ta, f.x.at}
+		fill[f.i]++
+		cuts[fill[f.j]] = crossingAt{f.x.tb, f.x.at}
+		fill[f.j]++
+	}
+	return first, cuts
+}
+
 // crossingAt is a point where a segment is to be cut, at parameter t.
 type crossingAt struct {
 	t  float64
 	at Vec
 }
 
-// cutAt returns s cut at the given crossings, in order along s. Cuts at the ends, or closer
-// than snapTol to another cut, change nothing.
-func cutAt(s Segment, cuts []crossingAt) []Segment {
+// cutAt appends to out s cut at the given crossings, in order along s. Cuts at the ends, or
+// closer than snapTol to another cut, change nothing.
+func cutAt(out []Segment, s Segment, cuts []crossingAt) []Segment {
 	slices.SortFunc(cuts, func(a, b crossingAt) int { return cmp.Compare(a.t, b.t) })
-	var out []Segment
 	t0, a := 0.0, s.A
 	for _, c := range cuts {
 		if c.t <= 0 || c.t >= 1 || c.at.Dist(a) <= snapTol || c.at.Dist(s.B) <= snapTol {
@@ -115,9 +145,12 @@ func eachBoxPair(boxes []Box, f func(i, j int)) {
 }
 
 // snapper merges points closer than snapTol into one seen earlier, using a hash grid so that
-// it costs O(1) a point.
+// it costs O(1) a point. The points of a cell are a linked list through pts, so a cell costs
+// no slice of its own.
 type snapper struct {
-	cells map[[2]int64][]Vec
+	cells map[[2]int64]int32 // cell → index in pts of its latest point + 1
+	pts   []Vec
+	next  []int32 // index in pts of the cell's point before this one + 1; 0 ends the list
 }
 
 // snapCell is the side of a snapper's grid cell. A point needs to look into a neighbouring
@@ -125,7 +158,10 @@ type snapper struct {
 // their own cell alone, where at 4 snapTol they looked into all nine about it.
 const snapCell = 16 * snapTol
 
-func newSnapper() *snapper { return &snapper{cells: map[[2]int64][]Vec{}} }
+// newSnapper returns an empty snapper with room for about n points.
+func newSnapper(n int) *snapper {
+	return &snapper{cells: make(map[[2]int64]int32, n), pts: make([]Vec, 0, n), next: make([]int32, 0, n)}
+}
 
 // point returns the representative of p: an earlier point within snapTol, or p itself.
 func (s *snapper) point(p Vec) Vec {
@@ -135,15 +171,17 @@ func (s *snapper) point(p Vec) Vec {
 	y0, y1 := snapReach(p.Y, fy)
 	for dx := x0; dx <= x1; dx++ {
 		for dy := y0; dy <= y1; dy++ {
-			for _, q := range s.cells[[2]int64{cx + dx, cy + dy}] {
-				if q.Dist(p) <= snapTol {
+			for k := s.cells[[2]int64{cx + dx, cy + dy}]; k > 0; k = s.next[k-1] {
+				if q := s.pts[k-1]; q.Dist(p) <= snapTol {
 					return q
 				}
 			}
 		}
 	}
 	c := [2]int64{cx, cy}
-	s.cells[c] = append(s.cells[c], p)
+	s.pts = append(s.pts, p)
+	s.next = append(s.next, s.cells[c])
+	s.cells[c] = int32(len(s.pts))
 	return p
 }
 

@@ -8,40 +8,72 @@ import "math"
 // order) and how many pieces could not be closed into a loop. Pieces must share end points
 // exactly, as splitPieces leaves them.
 func chainLoops(ps []piece) (loops []Contour, srcs [][]int, open int) {
-	from := map[Vec][]int{}
-	for i, p := range ps {
-		from[p.seg.A] = append(from[p.seg.A], i)
+	startID, endID, nodes := nodeIDs(ps)
+	from := byNode(startID, nodes) // pieces leaving each point, in index order
+	at := make([]int32, nodes)     // point → position in chain of the piece that leaves it, or −1
+	for k := range at {
+		at[k] = -1
 	}
 	used := make([]bool, len(ps))
+	var chain []int
 	for start := range ps {
 		if used[start] {
 			continue
 		}
-		var chain []int
-		at := map[Vec]int{} // point → position in chain of the piece that leaves it
+		chain = chain[:0]
 		for cur := start; cur >= 0; {
 			used[cur] = true
-			at[ps[cur].seg.A] = len(chain)
+			at[startID[cur]] = int32(len(chain))
 			chain = append(chain, cur)
-			end := ps[cur].seg.B
-			if k, ok := at[end]; ok {
+			end := endID[cur]
+			if end >= 0 && at[end] >= 0 {
 				// Back at a point already passed: the pieces since then close a loop.
+				k := int(at[end])
 				loops, srcs = appendLoop(loops, srcs, ps, chain[k:])
 				for _, i := range chain[k:] {
-					delete(at, ps[i].seg.A)
+					at[startID[i]] = -1
 				}
 				chain = chain[:k]
 				if k == 0 {
 					break
 				}
 			}
-			cur = leftmost(ps, from[end], used, ps[chain[len(chain)-1]].seg)
+			cur = -1
+			if end >= 0 {
+				cur = leftmost(ps, from(end), used, ps[chain[len(chain)-1]].seg)
+			}
 			if cur < 0 {
 				open += len(chain)
 			}
 		}
+		for _, i := range chain {
+			at[startID[i]] = -1
+		}
 	}
 	return loops, srcs, open
+}
+
+// nodeIDs numbers the distinct start points of ps: startID[i] is piece i's start, endID[i] its
+// end, or −1 when no piece starts there.
+func nodeIDs(ps []piece) (startID, endID []int32, nodes int) {
+	ids := make(map[Vec]int32, len(ps))
+	startID, endID = make([]int32, len(ps)), make([]int32, len(ps))
+	for i, p := range ps {
+		k, ok := ids[p.seg.A]
+		if !ok {
+			k = int32(len(ids))
+			ids[p.seg.A] = k
+		}
+		startID[i] = k
+	}
+	for i, p := range ps {
+		k, ok := ids[p.seg.B]
+		if !ok {
+			k = -1
+		}
+		endID[i] = k
+	}
+	return startID, endID, len(ids)
 }
 
 // appendLoop adds the pieces chain as one closed contour, merging pieces that continue one
@@ -62,10 +94,11 @@ func appendLoop(loops []Contour, srcs [][]int, ps []piece, chain []int) ([]Conto
 // leftmost returns the unused piece among cands that turns most to the left after in, or -1.
 // Pieces leaving in the same direction are told apart by curvature: the one curving more to
 // the left wins.
-func leftmost(ps []piece, cands []int, used []bool, in Segment) int {
+func leftmost(ps []piece, cands []int32, used []bool, in Segment) int {
 	best, bestTurn, bestCurv := -1, math.Inf(-1), math.Inf(-1)
 	tin := in.Tangent(1)
-	for _, i := range cands {
+	for _, c := range cands {
+		i := int(c)
 		if used[i] {
 			continue
 		}
@@ -97,7 +130,8 @@ func mergeContinuations(c Contour, src []int) (Contour, []int) {
 	if len(c) < 2 {
 		return c, src
 	}
-	out, osrc := Contour{c[0]}, []int{src[0]}
+	out, osrc := make(Contour, 1, len(c)), make([]int, 1, len(c))
+	out[0], osrc[0] = c[0], src[0]
 	for k := 1; k < len(c); k++ {
 		if m, ok := continues(out[len(out)-1], c[k]); ok && osrc[len(osrc)-1] == src[k] {
 			out[len(out)-1] = m
