@@ -4,12 +4,11 @@ import "math"
 
 // This file computes the signed offset of a region exactly. Each contour yields its raw offset
 // curves (every segment moved sideways by d, arcs about the convex corners, neighbours trimmed
-// at the concave ones); the parts of them shown to lie nearer than |d| to the boundary are
-// removed (prefilter.go), which on dense outlines is nearly all of them; what is left is cut
-// where it meets; a piece belongs to the answer
-// exactly when it lies |d| from the original boundary and no nearer, since every point of an
-// offset boundary is |d| from the nearest boundary point. The kept pieces are chained into
-// loops and assembled into regions.
+// at the concave ones). The parts of them shown to lie nearer than |d| to the boundary are
+// removed (prefilter.go), which on dense outlines is nearly all of them, and what is left is
+// cut where it meets. A piece belongs to the answer exactly when it lies |d| from the original
+// boundary and no nearer, since every point of an offset boundary is |d| from the nearest
+// boundary point. The kept pieces are chained into loops and assembled into regions.
 
 // ContourRef names one contour of a region: 0 is the outer contour, k the hole k−1.
 type ContourRef int
