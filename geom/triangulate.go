@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 )
 
@@ -33,7 +34,7 @@ func Triangulate(rings [][]Vec) ([][3]int32, error) {
 	if len(rings) == 0 || len(rings[0]) < 3 {
 		return nil, fmt.Errorf("%w: the outer ring has fewer than 3 points", ErrTriangulate)
 	}
-	t := &earCutter{}
+	t := &earCutter{minHeight: earMinHeight}
 	start := 0
 	var outer *ringNode
 	var holes []*ringNode
@@ -73,7 +74,12 @@ func Triangulate(rings [][]Vec) ([][3]int32, error) {
 	if start > zOrderMin {
 		t.indexZ(outer)
 	}
-	t.cut(outer, false)
+	t.cut(outer)
+	// derived: a complete triangulation of n points with h holes has n + 2h − 2 triangles;
+	// with nothing left over the repair pass (which builds maps of every edge) is not needed.
+	if !t.leftover && len(t.tris) == t.points+2*t.bridged-2 && t.points == start {
+		return t.tris, nil
+	}
 	return t.repairEdges(rings)
 }
 
@@ -90,6 +96,10 @@ type ringNode struct {
 // earCutter holds the triangles made so far and the Z-order frame.
 type earCutter struct {
 	tris       [][3]int32
+	minHeight  float64 // least height of an ear: earMinHeight, or 0 for a last resort
+	points     int     // points linked into rings
+	bridged    int     // holes joined to the outer ring
+	leftover   bool    // some ring or hole could not be cut and was left
 	minX, minY float64
 	invSize    float64 // 0 when the Z-order index is not used
 }
@@ -103,6 +113,7 @@ func (t *earCutter) link(r []Vec, start int) *ringNode {
 			continue
 		}
 		n := &ringNode{i: int32(start + k), p: p}
+		t.points++
 		if last == nil {
 			n.prev, n.next = n, n
 		} else {
@@ -139,25 +150,25 @@ const earMinArea = 4 * minTriangleArea
 const earMinHeight = 1e-4
 
 // convex reports whether the ring turns left at b by more than a straight run's rounding: the
-// triangle a, b, c has at least earMinArea and is at least earMinHeight high over every side.
-func convex(a, b, c Vec) bool {
+// triangle a, b, c has at least earMinArea and is at least t.minHeight high over every side.
+func (t *earCutter) convex(a, b, c Vec) bool {
 	o := orient(a, b, c)
 	long := math.Max(a.Dist(b), math.Max(b.Dist(c), c.Dist(a)))
-	return o > 2*earMinArea && o > earMinHeight*long
+	return o > 2*earMinArea && o > t.minHeight*long
 }
 
 // isEar reports whether the corner at e can be cut off: it turns left and no reflex point of the
 // ring lies in the triangle.
 func (t *earCutter) isEar(e *ringNode) bool {
 	a, b, c := e.prev, e, e.next
-	if !convex(a.p, b.p, c.p) {
+	if !t.convex(a.p, b.p, c.p) {
 		return false
 	}
 	if t.invSize > 0 {
 		return t.isEarZ(e)
 	}
 	for p := c.next; p != a; p = p.next {
-		if blocks(a, b, c, p) {
+		if t.blocks(a, b, c, p) {
 			return false
 		}
 	}
@@ -166,11 +177,11 @@ func (t *earCutter) isEar(e *ringNode) bool {
 
 // blocks reports whether point p stops the ear a-b-c: it lies in the triangle (edges count),
 // is not one of its corners, and is a reflex or straight point of the ring.
-func blocks(a, b, c, p *ringNode) bool {
+func (t *earCutter) blocks(a, b, c, p *ringNode) bool {
 	if p == a || p == b || p == c || p.p == a.p || p.p == c.p {
 		return false
 	}
-	return inTriangle(a.p, b.p, c.p, p.p) && !convex(p.prev.p, p.p, p.next.p)
+	return inTriangle(a.p, b.p, c.p, p.p) && !t.convex(p.prev.p, p.p, p.next.p)
 }
 
 // inTriangle reports whether p lies in the counter-clockwise triangle a, b, c or on its edges.
@@ -186,21 +197,22 @@ func (t *earCutter) isEarZ(e *ringNode) bool {
 	hi := Vec{math.Max(a.p.X, math.Max(b.p.X, c.p.X)), math.Max(a.p.Y, math.Max(b.p.Y, c.p.Y))}
 	minZ, maxZ := t.zCode(lo), t.zCode(hi)
 	for p := e.prevZ; p != nil && p.z >= minZ; p = p.prevZ {
-		if blocks(a, b, c, p) {
+		if t.blocks(a, b, c, p) {
 			return false
 		}
 	}
 	for p := e.nextZ; p != nil && p.z <= maxZ; p = p.nextZ {
-		if blocks(a, b, c, p) {
+		if t.blocks(a, b, c, p) {
 			return false
 		}
 	}
 	return true
 }
 
-// cut clips ears from the ring at start until it is used up; when a full round finds no ear it
-// splits the ring along a diagonal (once per ring: a split ring that is still stuck is left).
-func (t *earCutter) cut(e *ringNode, split bool) {
+// cut clips ears from the ring at e until it is used up; when a full round finds no ear it
+// splits the ring along a diagonal and cuts each half the same way (each half is smaller, so
+// this ends).
+func (t *earCutter) cut(e *ringNode) {
 	stop := e
 	for e.prev != e.next {
 		prev, next := e.prev, e.next
@@ -212,9 +224,7 @@ func (t *earCutter) cut(e *ringNode, split bool) {
 		}
 		e = next
 		if e == stop {
-			if !split {
-				t.splitCut(e)
-			}
+			t.splitCut(e)
 			return
 		}
 	}
@@ -231,13 +241,14 @@ func (t *earCutter) splitCut(start *ringNode) {
 					t.indexZ(a)
 					t.indexZ(c)
 				}
-				t.cut(a, true)
-				t.cut(c, true)
+				t.cut(a)
+				t.cut(c)
 				return
 			}
 		}
 		a = a.next
 		if a == start {
+			t.leftover = true
 			return
 		}
 	}
@@ -358,8 +369,10 @@ func leftmostNode(start *ringNode) *ringNode {
 func (t *earCutter) bridgeHole(h *ringNode, outer *ringNode, idx *bandIndex) *ringNode {
 	m := findBridge(h, idx)
 	if m == nil {
+		t.leftover = true
 		return outer
 	}
+	t.bridged++
 	for p := h; ; {
 		idx.add(p, p.p.Y, p.next.p.Y)
 		if p = p.next; p == h {
@@ -550,40 +563,256 @@ func spreadBits(v uint32) uint32 {
 // edgeKey is a directed edge between two numbered points.
 type edgeKey struct{ a, b int32 }
 
-// repairEdges makes the triangles' free edges exactly the ring edges. A point that lies on a
-// straight run of the ring can be left out by the cutting (a three-point remnant with no
-// area); the triangle across that run is then split at the point so that the point is
-// shared, as the wall beside the ring needs it. Any other mismatch means part of the polygon
-// was not covered, and is an error.
+// repairEdges makes the triangles' free edges exactly the ring edges. Points on a nearly
+// straight run of the ring may be left uncut: a remnant sliver too thin for any ear. Each
+// remnant is bounded by ring edges no triangle has and by triangle edges with no partner;
+// the triangle across one of those edges is replaced by a fan from its far corner to the
+// remnant's points, which covers both and shares every edge, as the walls beside the ring
+// need. A remnant bounded by ring edges alone means part of the polygon was not covered, and
+// is an error.
 func (t *earCutter) repairEdges(rings [][]Vec) ([][3]int32, error) {
 	var pts []Vec
 	ringEdge := map[edgeKey]bool{}
+	var order []edgeKey // ring edges in ring order, so repairs do not depend on map order
 	for _, r := range rings {
 		base := int32(len(pts))
 		pts = append(pts, r...)
 		for k := range r {
-			a, b := base+int32(k), base+int32((k+1)%len(r))
+			e := edgeKey{base + int32(k), base + int32((k+1)%len(r))}
 			if r[k] != r[(k+1)%len(r)] {
-				ringEdge[edgeKey{a, b}] = true
+				ringEdge[e] = true
+				order = append(order, e)
 			}
 		}
 	}
-	for range 4 {
+	for range maxRepairRounds {
 		used := t.edgeUse()
-		var missing []int32 // ends of ring edges no triangle has
-		for e := range ringEdge {
+		next := map[int32][]int32{}
+		for _, e := range order {
 			if used[e] == 0 {
-				missing = append(missing, e.a, e.b)
+				next[e.a] = append(next[e.a], e.b)
 			}
 		}
-		if len(missing) == 0 {
+		if len(next) == 0 {
 			return t.tris, t.checkFree(used, ringEdge)
 		}
-		if !t.splitAcross(pts, used, ringEdge, missing) {
+		for _, tr := range t.tris {
+			for k := range 3 {
+				u, v := tr[k], tr[(k+1)%3]
+				if !ringEdge[edgeKey{u, v}] && used[edgeKey{v, u}] == 0 {
+					next[v] = append(next[v], u)
+				}
+			}
+		}
+		if !t.fanRemnants(pts, ringEdge, used, next) && !t.cutRemnants(pts, order, used, next) {
 			break
 		}
 	}
 	return t.tris, fmt.Errorf("%w: some ring edges are not covered", ErrTriangulate)
+}
+
+// maxRepairRounds bounds the rounds of repairEdges; one round mends every remnant it can see,
+// a second finds nothing left.
+const maxRepairRounds = 4
+
+// maxRemnant is the most points a remnant's chain may have: remnants are a few points on a
+// nearly straight run.
+const maxRemnant = 256
+
+// fanRemnants replaces, for each remnant found through next, the triangle across one of its
+// free edges by a fan over the remnant's chain, and reports whether it replaced any.
+func (t *earCutter) fanRemnants(pts []Vec, ringEdge map[edgeKey]bool, used map[edgeKey]int, next map[int32][]int32) bool {
+	taken := map[edgeKey]bool{}
+	var out [][3]int32
+	changed := false
+	for _, tr := range t.tris {
+		fan := t.fanFor(tr, pts, ringEdge, used, next, taken)
+		if fan == nil {
+			out = append(out, tr)
+			continue
+		}
+		out = append(out, fan...)
+		changed = true
+	}
+	t.tris = out
+	return changed
+}
+
+// fanFor returns the fan that replaces triangle tr and the remnant across one of its free
+// edges, or nil.
+func (t *earCutter) fanFor(tr [3]int32, pts []Vec, ringEdge map[edgeKey]bool, used map[edgeKey]int,
+	next map[int32][]int32, taken map[edgeKey]bool) [][3]int32 {
+	for k := range 3 {
+		u, v, x := tr[k], tr[(k+1)%3], tr[(k+2)%3]
+		if ringEdge[edgeKey{u, v}] || used[edgeKey{v, u}] > 0 || taken[edgeKey{v, u}] {
+			continue
+		}
+		chain := walkRemnant(u, v, next, taken)
+		if chain == nil {
+			continue
+		}
+		fan := make([][3]int32, 0, len(chain)-1)
+		for i := 1; i < len(chain); i++ {
+			a, b := chain[i-1], chain[i]
+			if orient(pts[a], pts[b], pts[x]) <= 0 {
+				fan = nil
+				break
+			}
+			fan = append(fan, [3]int32{a, b, x})
+		}
+		if fan == nil {
+			continue
+		}
+		taken[edgeKey{v, u}] = true
+		for i := 1; i < len(chain); i++ {
+			taken[edgeKey{chain[i-1], chain[i]}] = true
+		}
+		return fan
+	}
+	return nil
+}
+
+// cutRemnants mends each remnant that no fan mends: its free edges, walked from a missing ring
+// edge, close into a counter-clockwise ring. The ring is cut into ears if it can be; if it is
+// too thin for any ear, the triangles across its free edges are taken in with it and the
+// whole is cut again. It reports whether it mended any.
+func (t *earCutter) cutRemnants(pts []Vec, order []edgeKey, used map[edgeKey]int, next map[int32][]int32) bool {
+	across := map[edgeKey]int{} // triangle holding each directed edge
+	for i, tr := range t.tris {
+		for k := range 3 {
+			across[edgeKey{tr[k], tr[(k+1)%3]}] = i
+		}
+	}
+	taken := map[edgeKey]bool{}
+	drop := map[int]bool{}
+	var add [][3]int32
+	for _, e := range order {
+		if used[e] > 0 || taken[e] {
+			continue
+		}
+		chain := walkRemnant(e.b, e.a, next, taken)
+		if chain == nil {
+			continue
+		}
+		loop := append([]int32{e.a}, chain[:len(chain)-1]...)
+		for i := range loop {
+			taken[edgeKey{loop[i], loop[(i+1)%len(loop)]}] = true
+		}
+		if tris, ok := cutLoop(loop, pts, earMinHeight); ok {
+			add = append(add, tris...)
+			continue
+		}
+		if tris, ok := t.widenAndCut(loop, pts, across, drop); ok {
+			add = append(add, tris...)
+		}
+	}
+	if len(add) == 0 {
+		return false
+	}
+	out := add
+	for i, tr := range t.tris {
+		if !drop[i] {
+			out = append(out, tr)
+		}
+	}
+	t.tris = out
+	return true
+}
+
+// widenAndCut cuts a thin remnant after taking in the triangles round it, ring by ring; when
+// that fails it cuts the remnant alone with ears of any height, whose corners still turn
+// left. The triangles taken in are added to drop.
+func (t *earCutter) widenAndCut(loop []int32, pts []Vec, across map[edgeKey]int, drop map[int]bool) ([][3]int32, bool) {
+	var gone []int
+	wide := loop
+	for range maxWiden {
+		var more []int
+		wide, more = widenLoop(wide, t.tris, across, drop, gone)
+		gone = append(gone, more...)
+		if tris, ok := cutLoop(wide, pts, earMinHeight); ok {
+			for _, g := range gone {
+				drop[g] = true
+			}
+			return tris, true
+		}
+	}
+	return cutLoop(loop, pts, 0)
+}
+
+// cutLoop cuts the counter-clockwise ring of numbered points loop into ears at least minHeight
+// high, and reports whether it was used up.
+func cutLoop(loop []int32, pts []Vec, minHeight float64) ([][3]int32, bool) {
+	var start, last *ringNode
+	for _, i := range loop {
+		n := &ringNode{i: i, p: pts[i]}
+		if start == nil {
+			start, n.prev, n.next = n, n, n
+		} else {
+			n.prev, n.next = last, start
+			last.next, start.prev = n, n
+		}
+		last = n
+	}
+	sub := &earCutter{minHeight: minHeight}
+	sub.cut(start)
+	return sub.tris, len(sub.tris) == len(loop)-2
+}
+
+// maxWiden is how many rings of neighbouring triangles a thin remnant may take in before it
+// is given up: each ring takes in the triangles across every edge, so three reach well past
+// a sliver between two runs that happen to lie on one line.
+const maxWiden = 3
+
+// widenLoop returns loop with the triangle across each of its edges taken in (the edge a→b
+// replaced by a→x→b, x the triangle's third corner), and the triangles taken; triangles in
+// drop or had are not taken again.
+func widenLoop(loop []int32, tris [][3]int32, across map[edgeKey]int, drop map[int]bool, had []int) ([]int32, []int) {
+	var wide []int32
+	var gone []int
+	for i, a := range loop {
+		b := loop[(i+1)%len(loop)]
+		wide = append(wide, a)
+		ti, ok := across[edgeKey{b, a}]
+		if !ok || drop[ti] || slices.Contains(gone, ti) || slices.Contains(had, ti) {
+			continue
+		}
+		tr := tris[ti]
+		for k := range 3 {
+			if tr[k] == b && tr[(k+1)%3] == a {
+				wide = append(wide, tr[(k+2)%3])
+			}
+		}
+		gone = append(gone, ti)
+	}
+	return wide, gone
+}
+
+// walkRemnant follows free edges from u until it reaches v, and returns the points passed,
+// u and v included; nil when no walk gets there. A point can start two free edges (where a
+// hole's bridge leaves and returns), so the walk tries each, shortest first.
+func walkRemnant(u, v int32, next map[int32][]int32, taken map[edgeKey]bool) []int32 {
+	var best []int32
+	var walk func(chain []int32)
+	walk = func(chain []int32) {
+		at := chain[len(chain)-1]
+		if at == v {
+			if len(chain) >= 3 && (best == nil || len(chain) < len(best)) {
+				best = append([]int32(nil), chain...)
+			}
+			return
+		}
+		if len(chain) > maxRemnant || best != nil && len(chain) >= len(best) {
+			return
+		}
+		for _, n := range next[at] {
+			if taken[edgeKey{at, n}] || at == u && n == v || slices.Contains(chain[1:], n) {
+				continue
+			}
+			walk(append(chain, n))
+		}
+	}
+	walk([]int32{u})
+	return best
 }
 
 // edgeUse counts how many triangles use each directed edge.
@@ -605,70 +834,4 @@ func (t *earCutter) checkFree(used map[edgeKey]int, ringEdge map[edgeKey]bool) e
 		}
 	}
 	return nil
-}
-
-// splitAcross splits each triangle whose free non-ring edge passes through points in cand, and
-// reports whether it split any.
-func (t *earCutter) splitAcross(pts []Vec, used map[edgeKey]int, ringEdge map[edgeKey]bool, cand []int32) bool {
-	changed := false
-	var out [][3]int32
-	for _, tr := range t.tris {
-		done := false
-		for k := 0; k < 3 && !done; k++ {
-			u, v, x := tr[k], tr[(k+1)%3], tr[(k+2)%3]
-			e := edgeKey{u, v}
-			if ringEdge[e] || used[edgeKey{v, u}] > 0 {
-				continue
-			}
-			on := pointsOn(pts, u, v, cand)
-			if len(on) == 0 {
-				continue
-			}
-			prev := u
-			for _, w := range append(on, v) {
-				out = append(out, [3]int32{prev, w, x})
-				prev = w
-			}
-			done, changed = true, true
-		}
-		if !done {
-			out = append(out, tr)
-		}
-	}
-	t.tris = out
-	return changed
-}
-
-// pointsOn returns the points of cand strictly between u and v on the segment u-v (within
-// rounding of a straight line), ordered from u to v, each once.
-func pointsOn(pts []Vec, u, v int32, cand []int32) []int32 {
-	a, b := pts[u], pts[v]
-	d := b.Sub(a)
-	l2 := d.Dot(d)
-	type hit struct {
-		i int32
-		t float64
-	}
-	var hits []hit
-	seen := map[int32]bool{}
-	for _, i := range cand {
-		if i == u || i == v || seen[i] {
-			continue
-		}
-		p := pts[i]
-		s := p.Sub(a).Dot(d) / l2
-		// Straight as convex judges it: the remnants are runs whose corners turn too little
-		// to be cut as ears.
-		if s <= 0 || s >= 1 || math.Abs(d.Cross(p.Sub(a))) > 2*earMinArea+earMinHeight*math.Sqrt(l2) {
-			continue
-		}
-		seen[i] = true
-		hits = append(hits, hit{i, s})
-	}
-	sort.Slice(hits, func(i, j int) bool { return hits[i].t < hits[j].t })
-	out := make([]int32, len(hits))
-	for k, h := range hits {
-		out[k] = h.i
-	}
-	return out
 }

@@ -92,10 +92,11 @@ const (
 	stripHeight = 36.0
 	// labelGap is the clearance kept around every label and mark.
 	labelGap = 1.0
-	// partChordError is the chord error allowed at the part, in mm: a quarter of a micrometre,
-	// well under what a dial shows. The template's tolerance is R times it, but never over
-	// maxPlateChord, a tenth of a typical nozzle's line width.
-	partChordError = 0.00025
+	// partChordError is the chord error allowed at the part, in mm: half a micrometre, well
+	// under what a dial shows. The template's tolerance is R times it (5 µm at 10:1, a
+	// hundredth of a printed line), but never over maxPlateChord, a tenth of a typical
+	// nozzle's line width; finer would only add triangles no printer can show.
+	partChordError = 0.0005
 	maxPlateChord  = 0.01
 )
 
@@ -188,7 +189,8 @@ type plateDesign struct {
 	surface           float64 // height of the surface the template is traced on
 	islandTop         float64
 	islands, openings []geom.Region
-	taken             []takenArea // everything placed, for finding room for labels
+	keepOff           []geom.Region // openings grown by labelGap, which grooves stop short of
+	taken             []takenArea   // everything placed, for finding room for labels
 }
 
 // newPlateDesign works out the heights and options that do not depend on the layout.
@@ -364,7 +366,10 @@ func (d *plateDesign) groove(f PlannedFeature) {
 	}
 	ch := geom.Union(caps...)
 	if len(d.openings) > 0 {
-		ch = geom.Difference(ch, geom.OffsetRegions(d.openings, labelGap))
+		if d.keepOff == nil {
+			d.keepOff = geom.OffsetRegions(d.openings, labelGap)
+		}
+		ch = geom.Difference(ch, d.keepOff)
 	}
 	for _, r := range ch {
 		d.add(PlateArea{What: "groove", Feature: f.Number, Region: r, Top: d.surfaceAt(r.Outer[0].A) - d.pl.WallHeight})
