@@ -92,6 +92,7 @@ func TestRenderPlates(t *testing.T) {
 	if dir == "" {
 		t.Skip("set PANTO_PLATE_PNG to a folder to get pictures of the sample plates")
 	}
+	writeLetteringPNG(t, filepath.Join(dir, "lettering.png"))
 	for _, name := range []string{"calibration-coupon.toml", "clock-bridge.toml", "pump-port-plate.toml"} {
 		for _, o := range []pantograph.PlateOptions{{}, {Style: pantograph.StyleGroove, Seat: pantograph.SeatCone}} {
 			pl, err := pantograph.BuildPlate(samplePlan(t, name, ""), nil, o)
@@ -119,5 +120,32 @@ func TestRenderPlates(t *testing.T) {
 			}
 			f.Close()
 		}
+	}
+}
+
+// writeLetteringPNG draws every character of the lettering sunk into a slab, seen from above.
+func writeLetteringPNG(t *testing.T, path string) {
+	c, _ := geom.Rect(geom.V(0, 0), geom.V(260, 40), 0)
+	root := geom.Terrace{Outline: c, Top: 2}
+	for i, line := range []string{"0123456789 :.-/+=#?Ø", "ABCDEFGHIJKLMNOPQRSTUVWXYZ"} {
+		rs, err := pantograph.TextOutlines(line, geom.V(5, 25-float64(i)*20), 8)
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, r := range rs {
+			root.Children = append(root.Children, geom.RegionTerrace(r, 1, 2))
+		}
+	}
+	m, err := geom.StepSolid(0, root, 0.005)
+	if err != nil {
+		t.Fatal(err)
+	}
+	f, err := os.Create(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer f.Close()
+	if err := png.Encode(f, renderMesh(m, 1600, 300, 0, 0)); err != nil {
+		t.Fatal(err)
 	}
 }
