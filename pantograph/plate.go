@@ -73,8 +73,9 @@ const (
 	boreClearance = 0.1
 	// grooveClearance is added to the stylus diameter for a channel of the groove style.
 	grooveClearance = 0.2
-	// coneAngle is the included angle of a conical seat (a 90° countersink shape): a pointed
-	// stylus of 60° to 90° touches the cone's wall and centres; the depth is half the rim.
+	// A conical seat has a 90° included angle (the countersink shape), so its depth is half its
+	// rim: a pointed stylus of 60° to 90° touches the cone's wall and centres. The rim is R
+	// times the hole (the room the hole has on the template), kept between these sizes.
 	coneRimMin, coneRimMax = 2.0, 8.0
 	// labelHeight and smallLabel are cap heights of the feature numbers; titleHeight of the
 	// title; labelDepth how deep the letters are sunk; markHeight how far the check bar and
@@ -279,7 +280,7 @@ func (d *plateDesign) fixingCentres() []geom.Vec {
 	return []geom.Vec{geom.V(left, lo), geom.V(right, lo), geom.V(left, hi), geom.V(right, hi)}
 }
 
-// add records an area and the room it takes.
+// add puts an area on the plate.
 func (d *plateDesign) add(a PlateArea) { d.pl.Areas = append(d.pl.Areas, a) }
 
 // template puts the traced features and grooves on the plate.
