@@ -90,6 +90,7 @@ type ringNode struct {
 	prev, next   *ringNode
 	z            uint32
 	prevZ, nextZ *ringNode
+	visit        uint32 // the last bandIndex visit that met this point
 }
 
 // earCutter holds the triangles made so far and the Z-order frame.
@@ -448,9 +449,7 @@ func visibleFrom(h, m *ringNode, qx float64, idx *bandIndex) *ringNode {
 type bandIndex struct {
 	minY, invH float64
 	bands      [][]*ringNode
-	seen       []uint32 // per visit, to call fn once per point
-	visit      uint32
-	mark       map[*ringNode]uint32
+	visit      uint32 // counts calls of each, so each point is met once per call
 }
 
 // newBandIndex returns an index over the ring at outer, with about one band per eight points
@@ -458,7 +457,7 @@ type bandIndex struct {
 func newBandIndex(outer *ringNode, box Box, n int) *bandIndex {
 	nb := max(1, n/8)
 	h := box.Size().Y
-	idx := &bandIndex{minY: box.Min.Y, bands: make([][]*ringNode, nb), mark: map[*ringNode]uint32{}}
+	idx := &bandIndex{minY: box.Min.Y, bands: make([][]*ringNode, nb)}
 	if h > 0 {
 		idx.invH = float64(nb) / h
 	}
@@ -488,10 +487,10 @@ func (x *bandIndex) each(y0, y1 float64, fn func(*ringNode) bool) {
 	x.visit++
 	for b := x.band(y0); b <= x.band(y1); b++ {
 		for _, p := range x.bands[b] {
-			if x.mark[p] == x.visit {
+			if p.visit == x.visit {
 				continue
 			}
-			x.mark[p] = x.visit
+			p.visit = x.visit
 			if !fn(p) {
 				return
 			}
