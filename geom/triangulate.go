@@ -178,7 +178,7 @@ func (t *earCutter) isEar(e *ringNode) bool {
 // blocks reports whether point p stops the ear a-b-c: it lies in the triangle (edges count),
 // is not one of its corners, and is a reflex or straight point of the ring.
 func (t *earCutter) blocks(a, b, c, p *ringNode) bool {
-	if p == a || p == b || p == c || p.p == a.p || p.p == c.p {
+	if p == a || p == b || p == c || p.p == a.p {
 		return false
 	}
 	return inTriangle(a.p, b.p, c.p, p.p) && !t.convex(p.prev.p, p.p, p.next.p)

@@ -36,23 +36,26 @@ func (t *earCutter) repairEdges(rings [][]Vec) ([][3]int32, error) {
 	for range maxRepairRounds {
 		used := t.edgeUse()
 		next := map[int32][]int32{}
+		var free []edgeKey // free edges in a fixed order: ring edges, then triangles' edges
 		for _, e := range order {
 			if used[e] == 0 {
 				next[e.a] = append(next[e.a], e.b)
+				free = append(free, e)
 			}
-		}
-		if len(next) == 0 {
-			return t.tris, t.checkFree(used, ringEdge)
 		}
 		for _, tr := range t.tris {
 			for k := range 3 {
 				u, v := tr[k], tr[(k+1)%3]
 				if !ringEdge[edgeKey{u, v}] && used[edgeKey{v, u}] == 0 {
 					next[v] = append(next[v], u)
+					free = append(free, edgeKey{v, u})
 				}
 			}
 		}
-		if !t.fanRemnants(pts, ringEdge, used, next) && !t.cutRemnants(pts, order, used, next) {
+		if len(free) == 0 {
+			return t.tris, t.checkFree(used, ringEdge)
+		}
+		if !t.fanRemnants(pts, ringEdge, used, next) && !t.cutRemnants(pts, free, next) {
 			break
 		}
 	}
@@ -120,11 +123,11 @@ func (t *earCutter) fanFor(tr [3]int32, pts []Vec, ringEdge map[edgeKey]bool, us
 	return nil
 }
 
-// cutRemnants mends each remnant that no fan mends: its free edges, walked from a missing ring
-// edge, close into a counter-clockwise ring. The ring is cut into ears if it can be; if it is
+// cutRemnants mends each remnant that no fan mends: its free edges, walked from the first of
+// them, close into a counter-clockwise ring. The ring is cut into ears if it can be; if it is
 // too thin for any ear, the triangles across its free edges are taken in with it and the
 // whole is cut again. It reports whether it mended any.
-func (t *earCutter) cutRemnants(pts []Vec, order []edgeKey, used map[edgeKey]int, next map[int32][]int32) bool {
+func (t *earCutter) cutRemnants(pts []Vec, free []edgeKey, next map[int32][]int32) bool {
 	across := map[edgeKey]int{} // triangle holding each directed edge
 	for i, tr := range t.tris {
 		for k := range 3 {
@@ -134,8 +137,8 @@ func (t *earCutter) cutRemnants(pts []Vec, order []edgeKey, used map[edgeKey]int
 	taken := map[edgeKey]bool{}
 	drop := map[int]bool{}
 	var add [][3]int32
-	for _, e := range order {
-		if used[e] > 0 || taken[e] {
+	for _, e := range free {
+		if taken[e] {
 			continue
 		}
 		chain := walkRemnant(e.b, e.a, next, taken)

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 
 	"panto/geom"
@@ -93,6 +94,9 @@ const (
 	stripHeight = 36.0
 	// labelGap is the clearance kept around every label and mark.
 	labelGap = 1.0
+	// datumRing is how far the ring marking the datum seat reaches beyond the seat; the ring
+	// is 1.5 mm wide, sunk labelDepth.
+	datumRing = 2.5
 	// partChordError is the chord error allowed at the part, in mm: half a micrometre, well
 	// under what a dial shows. The template's tolerance is R times it (5 µm at 10:1, a
 	// hundredth of a printed line), but never over maxPlateChord, a tenth of a typical
@@ -190,7 +194,7 @@ type plateDesign struct {
 	surface           float64 // height of the surface the template is traced on
 	islandTop         float64
 	islands, openings []geom.Region
-	keepOff           []geom.Region // openings grown by labelGap, which grooves stop short of
+	cuts              []geom.Region // channels and grooves as sunk
 	taken             []takenArea   // everything placed, for finding room for labels
 }
 
@@ -294,6 +298,7 @@ func (d *plateDesign) template() {
 			}
 		}
 	}
+	var cuts []geom.Region
 	if d.o.Style == StyleWall {
 		for _, f := range d.plan.Features {
 			for _, r := range f.TemplateRegions {
@@ -305,13 +310,12 @@ func (d *plateDesign) template() {
 			}
 		}
 	} else {
-		d.channels()
+		cuts = d.channelBands()
 	}
 	for _, f := range d.plan.Features {
-		if len(f.Path) > 1 {
-			d.groove(f)
-		}
+		cuts = append(cuts, grooveCaps(f)...)
 	}
+	d.cutChannels(cuts)
 	for _, r := range d.openings {
 		d.takeRegion(r)
 	}
@@ -330,9 +334,10 @@ func (d *plateDesign) grow(r geom.Region) geom.Region {
 	return out[0]
 }
 
-// channels cuts, for the groove style, a channel of stylus width plus clearance along the path
-// of the stylus's centre round every traced feature.
-func (d *plateDesign) channels() {
+// channelBands returns, for the groove style, a band of stylus width plus clearance along the
+// path of the stylus's centre round every traced feature.
+func (d *plateDesign) channelBands() []geom.Region {
+	var out []geom.Region
 	for _, f := range d.plan.Features {
 		rs := f.Stylus / 2
 		if f.Tip == TipPointed {
@@ -350,31 +355,48 @@ func (d *plateDesign) channels() {
 			}
 			outer := geom.OffsetRegions(centre, half)
 			inner := geom.OffsetRegions(centre, -half)
-			for _, band := range geom.Difference(outer, inner) {
-				d.add(PlateArea{What: "channel", Feature: f.Number, Region: band, Top: d.surface - d.pl.WallHeight})
-				d.takeRegion(band)
-			}
+			out = append(out, geom.Difference(outer, inner)...)
 		}
 	}
+	return out
 }
 
-// groove cuts a channel for an engraved groove along its path, kept off openings.
-func (d *plateDesign) groove(f PlannedFeature) {
+// grooveCaps returns the channel along an engraved groove's path: the groove's width plus
+// clearance, round-ended.
+func grooveCaps(f PlannedFeature) []geom.Region {
 	half := (f.Width + grooveClearance) / 2
 	var caps []geom.Region
 	for k := 1; k < len(f.Path); k++ {
 		caps = append(caps, geom.NewRegion(geom.Capsule(f.Path[k-1], f.Path[k], half)))
 	}
-	ch := geom.Union(caps...)
-	if len(d.openings) > 0 {
-		if d.keepOff == nil {
-			d.keepOff = geom.OffsetRegions(d.openings, labelGap)
+	return caps
+}
+
+// cutChannels sinks the channels, joined where they meet: kept a little off every seat and,
+// in the wall style, off the openings and within the island, so that no two areas of the
+// plate cross.
+func (d *plateDesign) cutChannels(cuts []geom.Region) {
+	if len(cuts) == 0 {
+		return
+	}
+	ch := geom.Union(cuts...)
+	var keep []geom.Region
+	if d.o.Style == StyleWall {
+		keep = geom.OffsetRegions(d.openings, labelGap)
+		ch = geom.Intersection(ch, geom.OffsetRegions(d.islands, -labelGap))
+	}
+	for _, f := range d.plan.Features {
+		for _, s := range f.Seats {
+			keep = append(keep, geom.NewRegion(geom.Circle(s, d.seatRadius()+datumRing+labelGap)))
 		}
-		ch = geom.Difference(ch, d.keepOff)
+	}
+	if len(keep) > 0 {
+		ch = geom.Difference(ch, keep)
 	}
 	for _, r := range ch {
-		d.add(PlateArea{What: "groove", Feature: f.Number, Region: r, Top: d.surfaceAt(r.Outer[0].A) - d.pl.WallHeight})
+		d.add(PlateArea{What: "channel", Region: r, Top: d.surfaceAt(r.Outer[0].A) - d.pl.WallHeight})
 		d.takeRegion(r)
+		d.cuts = append(d.cuts, r)
 	}
 }
 
@@ -409,7 +431,7 @@ func (d *plateDesign) seats() error {
 	if datumDone {
 		return nil
 	}
-	r := math.Max(coneRimMax, d.stylus+boreClearance+d.growth)/2 + 2.5 + labelGap
+	r := math.Max(coneRimMax, d.stylus+boreClearance+d.growth)/2 + datumRing + labelGap
 	if edge := d.edgeDistance(geom.Vec{}); edge < r {
 		d.pl.Notes = append(d.pl.Notes, fmt.Sprintf("the datum lies %.1f mm from a traced edge, too near for a seat: the plate has no datum seat; zero the dials on the datum as the part file places it", edge))
 		return nil
@@ -421,7 +443,7 @@ func (d *plateDesign) seats() error {
 // edgeDistance returns the distance from p to the nearest traced edge.
 func (d *plateDesign) edgeDistance(p geom.Vec) float64 {
 	best := math.Inf(1)
-	for _, r := range append(append([]geom.Region(nil), d.islands...), d.openings...) {
+	for _, r := range slices.Concat(d.islands, d.openings, d.cuts) {
 		for _, c := range r.Contours() {
 			for _, s := range c {
 				best = math.Min(best, s.DistanceTo(p))
@@ -451,7 +473,7 @@ func (d *plateDesign) seat(s geom.Vec, number int, footprint float64, datum bool
 	d.takeBox(geom.Box{Min: s, Max: s}.Expand(ps.Diameter/2 + labelGap))
 	if datum {
 		// A sunk ring round the datum seat marks it at a glance.
-		in, out := ps.Diameter/2+1, ps.Diameter/2+2.5
+		in, out := ps.Diameter/2+datumRing-1.5, ps.Diameter/2+datumRing
 		ring := geom.NewRegion(geom.Circle(s, out), geom.Circle(s, in))
 		d.add(PlateArea{What: "datum mark", Region: ring, Top: top - labelDepth})
 		d.takeBox(geom.Box{Min: s, Max: s}.Expand(out + labelGap))
