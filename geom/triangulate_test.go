@@ -138,3 +138,39 @@ func TestTriangulateRandom(t *testing.T) {
 		})
 	}
 }
+
+// TestTriangulateAligned cuts seeded random plates whose holes line up exactly: rectangles and
+// capsules on a grid, so many edges of different holes lie on one line. Ear cutting leaves
+// slivers along such lines, which the repair must mend.
+func TestTriangulateAligned(t *testing.T) {
+	for seed := int64(1); seed <= 150; seed++ {
+		t.Run(fmt.Sprint("seed ", seed), func(t *testing.T) {
+			rng := rand.New(rand.NewSource(seed))
+			n := 2 + rng.Intn(6)
+			rings := [][]Vec{{{0, 0}, {float64(10 * n), 0}, {float64(10 * n), float64(10 * n)}, {0, float64(10 * n)}}}
+			for i := range n {
+				for j := range n {
+					x, y := float64(10*i+2), float64(10*j+2)
+					var c Contour
+					switch rng.Intn(3) {
+					case 0:
+						c, _ = Rect(V(x, y), V(6, 3+float64(rng.Intn(2))), 0)
+					case 1:
+						c = Capsule(V(x+1, y+1), V(x+5, y+1), 1)
+					default:
+						continue
+					}
+					rings = append(rings, ringPoints(c.Reverse(), 0.01))
+				}
+			}
+			tris, err := Triangulate(rings)
+			if err != nil {
+				t.Fatalf("seed %d: %v", seed, err)
+			}
+			checkTriangulation(t, rings, tris)
+			if t.Failed() {
+				t.Logf("seed %d", seed)
+			}
+		})
+	}
+}
