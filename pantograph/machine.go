@@ -16,6 +16,7 @@ type Machine struct {
 
 	Ratio     RatioRange // the reductions the linkage can be set to
 	CopyTable Travel     // how far the copy table moves, in template mm
+	Fixing    Fixing     // how a template plate is bolted to the copy table
 	WorkTable Travel     // how far the work table moves, in part mm
 	Dials     Dials
 	Spindle   Spindle
@@ -85,6 +86,17 @@ func (r RatioRange) String() string {
 
 // Travel is how far a table moves along X and Y, in mm; 0 means not stated.
 type Travel struct{ X, Y float64 }
+
+// Fixing is how a template plate is held on the copy table, as the machine file's [copy_table]
+// states it. It is a field of Machine of its own, not of CopyTable, so that CopyTable stays a
+// plain Travel like WorkTable.
+type Fixing struct {
+	// Spacing is the distance between the centres of the clamps or T-slots, in mm: X along
+	// the table, Y across it (the T-slot pitch); 0 means not stated.
+	Spacing Travel
+	// Size is the diameter of the clamp bolts, in mm; 0 means not stated.
+	Size float64
+}
 
 // Tip is the shape of a stylus's end.
 type Tip string

@@ -44,7 +44,8 @@ type PlateOptions struct {
 	Seat  SeatKind   // "" means cone for a pointed stylus, bore for a round one
 	Style PlateStyle // "" means StyleWall
 	// FixingSpacing is the distance in mm between the centres of the fixing slots along X, to
-	// suit the copy table's clamps or T-slots; 0 puts a slot at each corner.
+	// suit the copy table's clamps or T-slots. 0 takes the machine file's fixing_spacing, or,
+	// when it states none, puts a slot near each corner. It wins over the machine file.
 	FixingSpacing float64
 }
 
@@ -64,8 +65,9 @@ const (
 	// plateCorner rounds the plate's corners.
 	plateCorner = 4.0
 	// fixingHole is the clearance hole for an M6 clamp bolt, the medium series of ISO 273
-	// (from memory); fixingInset is the distance of a slot's centreline from the plate edge;
-	// fixingTravel is how far a slot lets the plate slide to meet the clamp.
+	// (from memory), for when the machine file gives no bolt size; fixingInset is the distance
+	// of a slot's centreline from the plate edge (for M6); fixingTravel is how far a slot lets
+	// the plate slide to meet the clamp.
 	fixingHole   = 6.6
 	fixingInset  = 8.0
 	fixingTravel = 8.0
@@ -129,7 +131,11 @@ type Plate struct {
 	Labels []PlateLabel
 	// CheckBar is the length of the check bar and TestSquare the side of the test square.
 	CheckBar, TestSquare float64
-	Notes                []string // what could not be put on the plate, and why
+	// Notes are what could not be put on the plate and why, and where its fixing slots go.
+	Notes []string
+	// BedWarning says the plate as printed is larger than the machine file's printer bed,
+	// giving both sizes; "" when it fits or no bed is stated.
+	BedWarning string
 }
 
 // PlateArea is one area of the plate at its own height. An area's holes are islands left at
@@ -180,7 +186,9 @@ func BuildPlate(p Plan, m *Machine, o PlateOptions) (Plate, error) {
 	if err := d.numbers(); err != nil {
 		return Plate{}, err
 	}
-	return d.finish(), nil
+	pl := d.finish()
+	pl.BedWarning = bedWarning(pl, m)
+	return pl, nil
 }
 
 // plateDesign is the working state of BuildPlate, in the template frame until finish.
@@ -188,6 +196,7 @@ type plateDesign struct {
 	plan              Plan
 	o                 PlateOptions
 	pl                Plate
+	fix               plateFixing
 	stylus            float64 // the largest stylus diameter of the plan
 	growth            float64 // printer hole growth
 	box               geom.Box
@@ -236,6 +245,7 @@ func newPlateDesign(p Plan, m *Machine, o PlateOptions) *plateDesign {
 		d.surface, d.islandTop = d.pl.Base, d.pl.Base
 	}
 	d.pl.Title = fmt.Sprintf("%s %g:1 STYLUS %g CUTTER %g", p.Part, p.Ratio, d.stylus, p.Setup.Cutter)
+	d.newFixing(m)
 	return d
 }
 
@@ -246,16 +256,19 @@ func (d *plateDesign) layout() error {
 	}
 	margin := plateMargin + d.stylus
 	b := d.plan.Bounds.Expand(margin)
-	b.Min.Y -= stripHeight
-	need := checkBar + testSquare + 6*labelGap + 2*(fixingInset+fixingTravel+fixingHole)
+	b.Min.Y -= stripHeight + d.fix.extra()
+	b.Max.Y += d.fix.extra()
+	f := d.fix
+	need := checkBar + testSquare + 6*labelGap + 2*(f.inset+fixingTravel+f.hole)
 	if w := b.Size().X; w < need {
 		b.Min.X -= (need - w) / 2
 		b.Max.X += (need - w) / 2
 	}
-	if s := d.o.FixingSpacing; s > 0 && b.Size().X < s+2*(fixingInset+fixingHole) {
-		grow := (s + 2*(fixingInset+fixingHole) - b.Size().X) / 2
+	if s := f.spacing; s > 0 && b.Size().X < s+2*(f.inset+f.hole) {
+		grow := (s + 2*(f.inset+f.hole) - b.Size().X) / 2
 		b.Min.X, b.Max.X = b.Min.X-grow, b.Max.X+grow
 	}
+	b = d.rows(b)
 	d.box = b
 	outline, err := geom.Rect(b.Min, b.Size(), plateCorner)
 	if err != nil {
@@ -263,25 +276,12 @@ func (d *plateDesign) layout() error {
 	}
 	d.add(PlateArea{What: "base", Region: geom.NewRegion(outline), Top: d.pl.Base})
 	for _, c := range d.fixingCentres() {
-		r := (fixingHole + d.growth) / 2
+		r := (d.fix.hole + d.growth) / 2
 		slot := geom.Capsule(c, c.Add(geom.V(fixingTravel, 0)), r)
 		d.add(PlateArea{What: "fixing slot", Region: geom.NewRegion(slot), Open: true})
 		d.takeBox(slot.Bounds().Expand(labelGap))
 	}
 	return nil
-}
-
-// fixingCentres returns the left ends of the fixing slots: one near each corner, or a pair
-// FixingSpacing apart along the front and back edges.
-func (d *plateDesign) fixingCentres() []geom.Vec {
-	b := d.box
-	lo, hi := b.Min.Y+fixingInset, b.Max.Y-fixingInset
-	if s := d.o.FixingSpacing; s > 0 {
-		mid := b.Center().X - fixingTravel/2
-		return []geom.Vec{geom.V(mid-s/2, lo), geom.V(mid+s/2, lo), geom.V(mid-s/2, hi), geom.V(mid+s/2, hi)}
-	}
-	left, right := b.Min.X+fixingInset, b.Max.X-fixingInset-fixingTravel
-	return []geom.Vec{geom.V(left, lo), geom.V(right, lo), geom.V(left, hi), geom.V(right, hi)}
 }
 
 // add puts an area on the plate.

@@ -13,9 +13,9 @@ import (
 // strip puts the title, the check bar and the test square along the front of the plate.
 func (d *plateDesign) strip() error {
 	b := d.box
-	left, right := b.Min.X+fixingInset, b.Max.X-fixingInset
+	left, right := b.Min.X+d.fix.inset, b.Max.X-d.fix.inset
 	// Everything stands above the row of front fixing slots.
-	row := b.Min.Y + fixingInset + (fixingHole+d.growth)/2 + 2*labelGap
+	row := b.Min.Y + d.fix.inset + (d.fix.hole+d.growth)/2 + 2*labelGap
 	y := row + barWidth + 2*labelGap
 	title := d.pl.Title
 	h := titleHeight
@@ -144,8 +144,8 @@ func (d *plateDesign) roomNear(text string, b geom.Box) (geom.Vec, float64, bool
 // diameter, so the stylus running round the island never meets a letter.
 func (d *plateDesign) free(b geom.Box) bool {
 	g := b.Expand(labelGap)
-	inner := d.box.Expand(-fixingInset)
-	if !inner.ContainsPoint(g.Min) || !inner.ContainsPoint(g.Max) || g.Min.Y < d.box.Min.Y+stripHeight {
+	inner := d.box.Expand(-d.fix.inset)
+	if !inner.ContainsPoint(g.Min) || !inner.ContainsPoint(g.Max) || g.Min.Y < d.box.Min.Y+stripHeight+d.fix.extra() {
 		return false
 	}
 	for _, t := range d.taken {

@@ -19,6 +19,8 @@ import (
 //	units = "mm"                     "mm" (default) or "in": the unit of every length below
 //	[ratio]                          REQUIRED: min and max, or settings = [2, 3, 5, 10]
 //	[copy_table]  travel = [x, y]    how far the table moves
+//	  fixing_spacing = [x, y]        centre distance of its clamps or T-slots, for the plate
+//	  fixing_size                    diameter of its clamp bolts
 //	[work_table]  travel = [x, y]
 //	[dials.copy_x] (copy_y, work_x, work_y, depth)
 //	  pitch, divisions               REQUIRED in a dial: advance per turn, graduations per turn
@@ -287,13 +289,18 @@ func describeValue(v any) string {
 	return describe(v)
 }
 
-// readTables reads the travel of [copy_table] and [work_table].
+// readTables reads the travel of [copy_table] and [work_table], and how a template plate is
+// bolted to the copy table.
 func readTables(top table, mc *pantograph.Machine) error {
 	for _, tt := range []struct {
-		key string
-		to  *pantograph.Travel
-	}{{"copy_table", &mc.CopyTable}, {"work_table", &mc.WorkTable}} {
-		t, ok, err := top.optChild(tt.key, "travel")
+		key   string
+		to    *pantograph.Travel
+		known []string
+	}{
+		{"copy_table", &mc.CopyTable, []string{"travel", "fixing_spacing", "fixing_size"}},
+		{"work_table", &mc.WorkTable, []string{"travel"}},
+	} {
+		t, ok, err := top.optChild(tt.key, tt.known...)
 		if err != nil {
 			return err
 		}
@@ -302,8 +309,36 @@ func readTables(top table, mc *pantograph.Machine) error {
 				return err
 			}
 		}
+		if ok && tt.key == "copy_table" {
+			if err := readFixing(t, &mc.Fixing); err != nil {
+				return err
+			}
+		}
 	}
 	return nil
+}
+
+// maxFixingSize is the largest clamp bolt a copy table takes, in mm: an inch (common practice,
+// no source: bench pantographs clamp with M6 to M10 or 1/4 to 3/8 in bolts). A larger size is
+// taken for a mistake, such as a bolt size written in mm in an inch file.
+const maxFixingSize = 25.4
+
+// readFixing reads fixing_spacing and fixing_size of [copy_table].
+func readFixing(t table, f *pantograph.Fixing) error {
+	var err error
+	if v, ok := t.m["fixing_spacing"]; ok {
+		if f.Spacing.X, f.Spacing.Y, err = t.at("fixing_spacing").pair(v, loc.length); err != nil {
+			return err
+		}
+	}
+	if v, ok := t.m["fixing_size"]; ok {
+		l := t.at("fixing_size")
+		if f.Size, err = l.length(v); err == nil && f.Size > maxFixingSize {
+			err = l.errf("must be the clamp bolts' diameter, at most %g mm (1 in), got %.4g mm",
+				maxFixingSize, f.Size)
+		}
+	}
+	return err
 }
 
 // readDials reads [dials.copy_x] and the other dials.

@@ -35,6 +35,8 @@ units = "mm"
 settings = [10, 2, 5, 5]
 [copy_table]
 travel = [250, 150]
+fixing_spacing = [100, 50]
+fixing_size = 6
 [work_table]
 travel = [60, 40.5]
 [dials.copy_x]
@@ -85,6 +87,7 @@ hole_growth = 0.3
 		// settings sorted and each kept once; min and max are the ends
 		Ratio:     pantograph.RatioRange{Min: 2, Max: 10, Settings: []float64{2, 5, 10}},
 		CopyTable: pantograph.Travel{X: 250, Y: 150},
+		Fixing:    pantograph.Fixing{Spacing: pantograph.Travel{X: 100, Y: 50}, Size: 6},
 		WorkTable: pantograph.Travel{X: 60, Y: 40.5},
 		Dials: pantograph.Dials{
 			CopyX: pantograph.Dial{Pitch: 2, Divisions: 100, Units: pantograph.MM, Backlash: 0.08, Reversed: true},
@@ -115,6 +118,7 @@ func checkMachine(t *testing.T, got, want pantograph.Machine) {
 		{"name", got.Name, want.Name}, {"source", got.Source, want.Source}, {"units", got.Units, want.Units},
 		{"ratio min", got.Ratio.Min, want.Ratio.Min}, {"ratio max", got.Ratio.Max, want.Ratio.Max},
 		{"copy table", got.CopyTable, want.CopyTable}, {"work table", got.WorkTable, want.WorkTable},
+		{"fixing", got.Fixing, want.Fixing},
 		{"dials", got.Dials, want.Dials}, {"spindle", got.Spindle, want.Spindle}, {"printer", got.Printer, want.Printer},
 	}
 	for _, p := range pairs {
@@ -152,6 +156,8 @@ func TestReadMachineInches(t *testing.T) {
 	m := readMachine(t, `units = "in"
 `+ratioHead+`[copy_table]
 travel = [12, 6]
+fixing_spacing = [4, 2]
+fixing_size = 0.25
 [dials.copy_x]
 pitch = 0.1
 divisions = 100
@@ -177,6 +183,9 @@ hole_growth = 0.01
 	}{
 		{"copy travel x", m.CopyTable.X, 12 * in},
 		{"copy travel y", m.CopyTable.Y, 6 * in},
+		{"fixing spacing x", m.Fixing.Spacing.X, 4 * in},
+		{"fixing spacing y", m.Fixing.Spacing.Y, 2 * in},
+		{"fixing bolt", m.Fixing.Size, 0.25 * in},
 		{"copy x pitch, in inches", m.Dials.CopyX.Pitch, 0.1},
 		{"copy x backlash, in inches", m.Dials.CopyX.Backlash, 0.004},
 		{"depth pitch, in its own mm", m.Dials.Depth.Pitch, 1},
@@ -224,6 +233,16 @@ func TestReadMachineErrors(t *testing.T) {
 		{"ratio as a value", "ratio = 10\n", 1, "must be a table, written [ratio] on a line of its own"},
 		{"travel one number", ratioHead + "[copy_table]\ntravel = 250\n", 5, "key travel: must be two numbers written [x, y], got 250"},
 		{"travel negative", ratioHead + "[work_table]\ntravel = [60, -40]\n", 5, "key travel (entry 2): must be greater than 0, got -40"},
+		{"fixing spacing one number", ratioHead + "[copy_table]\ntravel = [250, 150]\nfixing_spacing = 100\n", 6,
+			"[copy_table]: key fixing_spacing: must be two numbers written [x, y], got 100"},
+		{"fixing spacing zero", ratioHead + "[copy_table]\nfixing_spacing = [100, 0]\n", 5,
+			"key fixing_spacing (entry 2): must be greater than 0, got 0"},
+		{"fixing size text", ratioHead + "[copy_table]\nfixing_size = \"M6\"\n", 5, `key fixing_size: must be a number, got text "M6"`},
+		// 6 read as inches is 152.4 mm, far over the 25.4 mm limit
+		{"fixing size in the wrong units", `units = "in"` + "\n" + ratioHead + "[copy_table]\nfixing_size = 6\n", 6,
+			"key fixing_size: must be the clamp bolts' diameter, at most 25.4 mm (1 in), got 152.4 mm"},
+		{"fixing on the work table", ratioHead + "[work_table]\nfixing_spacing = [100, 50]\n", 5, "unknown key `fixing_spacing` in [work_table]"},
+		{"fixing typo", ratioHead + "[copy_table]\nfixing_spacng = [100, 50]\n", 5, "did you mean `fixing_spacing`?"},
 		{"dial pitch missing", ratioHead + "[dials.copy_x]\ndivisions = 100\n", 4, "[dials.copy_x]: pitch missing"},
 		{"dial zero pitch", ratioHead + "[dials.copy_x]\npitch = 0\ndivisions = 100\n", 5, "key pitch: must be greater than 0, got 0"},
 		{"dial fractional divisions", ratioHead + "[dials.depth]\npitch = 1\ndivisions = 50.5\n", 6, "must be a whole number, got 50.5"},
@@ -317,6 +336,11 @@ func TestReadMachineSamples(t *testing.T) {
 		{"inch copy x per division", inch.Dials.CopyX.Pitch / float64(inch.Dials.CopyX.Divisions), 0.001},
 		{"inch 1/8 stylus in mm", inch.Styli[1].Diameter, 0.125 * in},
 		{"inch copy travel in mm", inch.CopyTable.X, 12 * in},
+		// from the samples' comments: T-slots 50 mm apart on the bench mill, 1.5 in on the engraver
+		{"bench T-slot pitch", bench.Fixing.Spacing.Y, 50},
+		{"bench bolt", bench.Fixing.Size, 6},
+		{"inch T-slot pitch in mm", inch.Fixing.Spacing.Y, 1.5 * in},
+		{"inch bolt in mm", inch.Fixing.Size, 0.25 * in},
 	}
 	for _, c := range checks {
 		if !near(c.got, c.want, 1e-12) {
