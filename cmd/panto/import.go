@@ -12,7 +12,6 @@ import (
 
 	"github.com/spf13/pflag"
 
-	"panto/export/dxf"
 	"panto/export/parttoml"
 	"panto/pantograph"
 	"panto/pantograph/drawing"
@@ -22,10 +21,7 @@ import (
 // importFlags are the options of `panto import`.
 type importFlags struct {
 	out     string
-	units   string
-	holeMax float64
-	layers  []string
-	join    float64
+	drawing drawingFlags
 	thick   float64
 	stuff   string
 	force   bool
@@ -41,24 +37,13 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 	fl := pflag.NewFlagSet("import", pflag.ContinueOnError)
 	fl.SetOutput(io.Discard)
 	fl.StringVarP(&o.out, "output", "o", "", "the part file to write (default: the drawing's name with .toml)")
-	fl.StringVar(&o.units, "units", "", "the drawing's units, mm or in, when the file does not say or says wrong")
-	fl.Float64Var(&o.holeMax, "hole-max", 0, "circles this diameter or smaller become drilled holes (drawing units)")
-	fl.StringArrayVar(&o.layers, "layer", nil, "NAME=KIND[:DEPTH]: what a layer's outlines are")
-	fl.Float64Var(&o.join, "join", 0, "join ends this close, in mm (default 0.001)")
+	addDrawingFlags(fl, &o.drawing)
 	fl.Float64Var(&o.thick, "thickness", 0, "stock thickness, in the drawing's units")
 	fl.StringVar(&o.stuff, "material", "", "stock material, e.g. brass")
 	fl.BoolVar(&o.force, "force", false, "overwrite the part file if it exists")
 	fl.BoolVarP(&o.help, "help", "h", false, "show help")
-	if err := fl.Parse(args); err != nil {
-		fmt.Fprintf(stderr, "panto import: %v\nRun 'panto help import' for usage.\n", err)
-		return exitUsage
-	}
-	if o.help {
-		return runHelp([]string{"import"}, stdout, stderr)
-	}
-	if fl.NArg() != 1 {
-		fmt.Fprintf(stderr, "panto import: give exactly one drawing, got %d\nUsage: %s\n", fl.NArg(), importSynopsis)
-		return exitUsage
+	if code, done := parseOne("import", "drawing", importSynopsis, fl, args, &o.help, stdout, stderr); done {
+		return code
 	}
 	opts, err := o.options()
 	if err != nil {
@@ -68,33 +53,15 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 	return importDrawing(fl.Arg(0), o, opts, stdout, stderr)
 }
 
-// options turns the flags into drawing options.
+// options turns the flags into drawing options. The stock's thickness is in the drawing's
+// units here, as it is written into the part file.
 func (o importFlags) options() (drawing.Options, error) {
-	opts := drawing.Options{HoleMax: o.holeMax, JoinTol: o.join, Layers: map[string]drawing.LayerRule{},
-		Thickness: o.thick, Material: o.stuff}
-	if !(o.thick >= 0 && o.thick < 1e6) {
-		return opts, fmt.Errorf("--thickness must be 0 or more, got %g", o.thick)
+	opts, err := o.drawing.options()
+	if err != nil {
+		return opts, err
 	}
-	switch pantograph.Units(o.units) {
-	case "", pantograph.MM, pantograph.Inch:
-		opts.Units = pantograph.Units(o.units)
-	default:
-		return opts, fmt.Errorf("--units must be mm or in, got %q", o.units)
-	}
-	if !(o.join >= 0 && o.join <= 1) {
-		return opts, fmt.Errorf("--join must be between 0 and 1 mm, got %g", o.join)
-	}
-	if o.holeMax < 0 || o.holeMax != o.holeMax {
-		return opts, fmt.Errorf("--hole-max must be 0 or more, got %g", o.holeMax)
-	}
-	for _, l := range o.layers {
-		name, rule, err := drawing.ParseLayerRule(l)
-		if err != nil {
-			return opts, fmt.Errorf("--layer %v", err)
-		}
-		opts.Layers[name] = rule
-	}
-	return opts, nil
+	opts.Thickness, opts.Material = o.thick, o.stuff
+	return opts, checkThickness(o.thick)
 }
 
 // importDrawing reads the drawing, prints the report and writes the part file.
@@ -175,24 +142,6 @@ func writeFileAtomic(path string, data []byte) error {
 		os.Remove(tmp.Name())
 	}
 	return err
-}
-
-// makeDXFFiles returns the DXF files `panto make` writes into the output folder beside the
-// plate: template.dxf (outline, openings, seats, grooves and labels on their own layers, in
-// template mm, the laser kerf compensated when kerf > 0) and part.dxf (the part at true size).
-func makeDXFFiles(part pantograph.Part, p pantograph.Plan, kerf float64) ([]sheetFile, error) {
-	tmpl, err := dxf.TemplateDrawing(p, kerf)
-	if err != nil {
-		return nil, err
-	}
-	var t, pt bytes.Buffer
-	if err := dxf.Encode(&t, tmpl); err != nil {
-		return nil, err
-	}
-	if err := dxf.Encode(&pt, dxf.PartDrawing(part)); err != nil {
-		return nil, err
-	}
-	return []sheetFile{{name: "template.dxf", data: t.Bytes()}, {name: "part.dxf", data: pt.Bytes()}}, nil
 }
 
 // readPartOrDrawing reads a part file, or a DXF or SVG drawing with opts (its report going to

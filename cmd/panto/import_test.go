@@ -40,10 +40,9 @@ func TestImportExitCodes(t *testing.T) {
 		{"would overwrite", []string{"import", "-o", exists, drawings + "plate-mm.dxf"}, exitUsage, "already exists; give --force"},
 		// The bad value "1,5" is on line 8 of the file (derived by counting).
 		{"bad drawing", []string{"import", "-o", filepath.Join(dir, "b.toml"), badDXF}, exitUsage, "bad.dxf:8: CIRCLE: group 10 should be a number"},
-		// plan reads drawings too; a drawing has no stock thickness, so the part fails its
-		// checks, and the message names the drawing.
+		// plan reads drawings too; a drawing has no stock thickness, so --thickness is asked for.
 		{"plan a drawing", []string{"plan", drawings + "pump-port-plate.svg", "--ratio", "10", "--cutter", "0.5"}, exitUsage,
-			"pump-port-plate.svg:6: error: [stock]: stock thickness missing"},
+			"pump-port-plate.svg: a drawing does not say how thick the stock is; give it with --thickness MM"},
 		{"bad thickness", []string{"import", "--thickness", "-1", drawings + "plate-mm.dxf"}, exitUsage, "--thickness must be 0 or more"},
 		// The fixture's second line starts 0.05 from where the first ends (derived: 0.05 − 0).
 		{"gap reported", []string{"import", "-o", filepath.Join(dir, "g.toml"), drawings + "triangle-gap.dxf"}, exitUsage,

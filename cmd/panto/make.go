@@ -2,7 +2,6 @@ package main
 
 import (
 	"bytes"
-	"errors"
 	"fmt"
 	"io"
 	"time"
@@ -11,27 +10,24 @@ import (
 
 	"panto/export/stl"
 	"panto/pantograph"
-	"panto/pantograph/drawing"
-	"panto/pantograph/partfile"
 )
 
-const makeSynopsis = "panto make PART --ratio R --cutter D [--machine FILE] [--seat cone|bore] [--style wall|groove] -o DIR [--force]"
+const makeSynopsis = "panto make PART --ratio R --cutter D [--machine FILE] [--seat cone|bore] [--style wall|groove] [--kerf MM] -o DIR [--force]"
 
 // makeFlags are the options of `panto make` beyond those it shares with `panto plan`.
 type makeFlags struct {
 	out, paper, date, seat, style string
-	fixingSpacing                 float64
+	fixingSpacing, kerf           float64
 	force                         bool
 }
 
 // makeJob is everything `panto make` knows when it makes its files.
 type makeJob struct {
-	part    pantograph.Part
-	plan    pantograph.Plan
-	machine *pantograph.Machine // nil without a machine file
-	plate   pantograph.PlateOptions
-	paper   string
-	date    string
+	planned
+	plate pantograph.PlateOptions
+	paper string
+	date  string
+	kerf  float64 // laser kerf for template.dxf, mm
 }
 
 // makeWriter returns some of the files `panto make` writes, and writes to report what the
@@ -39,10 +35,10 @@ type makeJob struct {
 // adding a writer to makeWriters, in its own file.
 type makeWriter func(j makeJob, report io.Writer) ([]sheetFile, error)
 
-// makeWriters lists what `panto make` writes, in order: the template plate (this file), then
-// the dial sheet and drawings (make_sheet.go).
+// makeWriters lists what `panto make` writes, in order: the template plate (this file), the
+// dial sheet and drawings (make_sheet.go), then the DXF files for cutting (make_dxf.go).
 func makeWriters() []makeWriter {
-	return []makeWriter{plateWriter, sheetWriter}
+	return []makeWriter{plateWriter, sheetWriter, dxfWriter}
 }
 
 // runMake is `panto make PART ...`: plan the part and write the template plate, the sheet and
@@ -57,19 +53,12 @@ func runMake(args []string, stdout, stderr io.Writer) int {
 	fl.StringVar(&mo.seat, "seat", "", "seats for drilled holes: cone or bore")
 	fl.StringVar(&mo.style, "style", "wall", "how traced edges are made: wall or groove")
 	fl.Float64Var(&mo.fixingSpacing, "fixing-spacing", 0, "distance between fixing slots, mm")
+	fl.Float64Var(&mo.kerf, "kerf", 0, "width the laser or router cuts, mm, for template.dxf")
 	fl.StringVar(&mo.paper, "paper", "a4", "paper size: a4 or letter")
 	fl.StringVar(&mo.date, "date", "", "date printed on the sheet (default today)")
 	fl.BoolVar(&mo.force, "force", false, "overwrite existing files")
-	if err := fl.Parse(args); err != nil {
-		fmt.Fprintf(stderr, "panto make: %v\nRun 'panto help make' for usage.\n", err)
-		return exitUsage
-	}
-	if o.help {
-		return runHelp([]string{"make"}, stdout, stderr)
-	}
-	if fl.NArg() != 1 {
-		fmt.Fprintf(stderr, "panto make: give exactly one part file, got %d\nUsage: %s\n", fl.NArg(), makeSynopsis)
-		return exitUsage
+	if code, done := parseOne("make", partOrDrawing, makeSynopsis, fl, args, &o.help, stdout, stderr); done {
+		return code
 	}
 	plate, err := mo.plateOptions()
 	if err == nil && mo.out == "" {
@@ -86,7 +75,7 @@ func runMake(args []string, stdout, stderr io.Writer) int {
 	if mo.date == "" {
 		mo.date = time.Now().UTC().Format("2006-01-02")
 	}
-	return makeAll(fl.Arg(0), setup, o.machine, mo, plate, stdout, stderr)
+	return makeAll(fl.Arg(0), setup, o, mo, plate, stdout, stderr)
 }
 
 // plateOptions checks the plate flags.
@@ -100,43 +89,28 @@ func (mo makeFlags) plateOptions() (pantograph.PlateOptions, error) {
 		return p, fmt.Errorf("--style must be wall or groove, got %q", mo.style)
 	case !(mo.fixingSpacing >= 0):
 		return p, fmt.Errorf("--fixing-spacing must be 0 (a slot at each corner) or more, got %g", mo.fixingSpacing)
+	case !(mo.kerf >= 0 && mo.kerf < maxKerf):
+		return p, fmt.Errorf("--kerf must be 0 or more and less than %g mm, got %g", float64(maxKerf), mo.kerf)
 	}
 	return p, nil
 }
 
+// maxKerf bounds --kerf: a CO2 laser cuts about 0.1 to 0.3 mm wide and a small router bit is a
+// few mm, so 10 mm or more is a slip of the keyboard (common practice, no source).
+const maxKerf = 10
+
 // makeAll reads, plans, and writes every file; nothing is written unless all could be made.
-func makeAll(path string, setup pantograph.Setup, machinePath string, mo makeFlags,
+func makeAll(path string, setup pantograph.Setup, o planFlags, mo makeFlags,
 	plate pantograph.PlateOptions, stdout, stderr io.Writer) int {
-	part, err := readPartOrDrawing(path, drawing.Options{}, stderr)
-	if err != nil {
-		return reportReadError(err, stderr)
+	pj, code, ok := readAndPlan("make", path, o, setup, stderr)
+	if !ok {
+		return code
 	}
-	j := makeJob{part: part, plate: plate, paper: mo.paper, date: mo.date}
-	if machinePath != "" {
-		m, err := partfile.ReadMachineFile(machinePath)
-		if err != nil {
-			fmt.Fprintf(stderr, "panto make: %v\n", err)
-			return exitUsage
-		}
-		j.machine = &m
-	}
-	p, err := pantograph.PlanPart(part, setup, j.machine)
-	var pe pantograph.PartErrors
-	switch {
-	case errors.As(err, &pe):
-		for _, pr := range pe {
-			fmt.Fprintln(stderr, pr.Error())
-		}
-		fmt.Fprintf(stderr, "panto make: %s has errors; fix them first (panto check shows them all)\n", path)
-		return exitUsage
-	case err != nil:
-		fmt.Fprintf(stderr, "panto make: %v\n", err)
-		return exitUsage
-	}
+	p := pj.plan
 	if !p.Done() {
 		return planExit(p, stderr)
 	}
-	j.plan = p
+	j := makeJob{planned: pj, plate: plate, paper: mo.paper, date: mo.date, kerf: mo.kerf}
 	var files []sheetFile
 	var report bytes.Buffer
 	for _, w := range makeWriters() {
@@ -226,13 +200,19 @@ const plateAdvice = `  print it flat, base down, at 100 % (corrections are alrea
 
 const makeUsage = `Usage: ` + makeSynopsis + `
 
-Plans the part as 'panto plan' does (same flags: --ratio, --cutter, --cutter-for, --stylus,
---tip, --machine, --mirror, --rotate, --accept-loss, --mill-holes) and writes into the
-folder DIR everything needed at the machine:
+Plans PART, a part file or a DXF or SVG drawing, as 'panto plan' does (same flags: --ratio,
+--cutter, --cutter-for, --stylus, --tip, --machine, --mirror, --rotate, --accept-loss,
+--mill-holes, --thickness, --material, and --units, --hole-max, --layer, --join for a
+drawing) and writes into the folder DIR everything needed at the machine:
 
   template.stl   the template plate to print (binary STL, mm, all coordinates positive)
   sheet.*        the dial-reading sheet (PDF, text, CSV, JSON), as 'panto sheet' writes it
   template.*, part.*   the true-scale drawings (SVG and PDF)
+  template.dxf   the template for cutting on a laser or CNC router instead of printing:
+                 in mm, outline, openings, seats (circles of the stylus diameter), groove
+                 centrelines and numbered labels each on its own layer (OUTLINE, OPENINGS,
+                 SEATS, GROOVES, LABELS), arcs kept as arcs
+  part.dxf       the part at true size, a layer per kind of feature
 
 The plate is a flat base with a fixing slot at each corner (or a pair each side
 --fixing-spacing apart) and a front strip with the title, a check bar and a test square.
@@ -245,7 +225,13 @@ stylus diameter plus 0.1 mm for a round one (--seat chooses; the default follows
 The datum seat has a ring round it. Each feature's number, as on the sheet, is sunk beside
 it. The machine file's printer scale and hole growth are applied.
 
-The run prints the plate's size and triangle count, and how to print it.
+A laser or router cuts a kerf as wide as its beam or bit, centred on the line. --kerf gives
+that width: template.dxf's outline then moves out by kerf/2 and its openings and seats in by
+kerf/2, so the pieces come out at the template's size. Leave it at 0 when the cutting program
+allows for the kerf itself.
+
+The run prints the plate's size and triangle count, how to print it, and what the DXF files
+hold.
 
 Existing files are not overwritten unless --force is given; each file is written under a
 temporary name and renamed, so an interrupted run leaves no half file.
@@ -255,6 +241,8 @@ Flags (besides the plan flags):
       --seat cone|bore       seats for drilled holes (default: cone for a pointed stylus)
       --style wall|groove    raised walls or channels for traced edges (default wall)
       --fixing-spacing MM    distance between fixing slots along X (default: at the corners)
+      --kerf MM              width the laser or router cuts, allowed for in template.dxf
+                             (default 0: none)
       --paper a4|letter      paper size of the PDFs (default a4)
       --date TEXT            date printed on the sheet (default: today, UTC)
       --force                overwrite existing files

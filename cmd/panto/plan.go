@@ -1,7 +1,6 @@
 package main
 
 import (
-	"errors"
 	"fmt"
 	"io"
 	"sort"
@@ -13,17 +12,19 @@ import (
 	"panto/export/planjson"
 	"panto/geom"
 	"panto/pantograph"
-	"panto/pantograph/drawing"
-	"panto/pantograph/partfile"
 )
 
-// planFlags are the options of `panto plan`.
+// planFlags are the options of `panto plan`; sheet and make share all but --json.
 type planFlags struct {
 	ratio, cutter, stylus, rotate float64
 	cutterFor                     map[string]string
 	tip, machine                  string
 	mirror, acceptLoss, millHoles bool
 	asJSON, help                  bool
+	thickness                     float64 // stock, mm; 0 keeps the part file's
+	material                      string
+	drawing                       drawingFlags
+	drawingGiven                  []string // the drawing flags given, for a word when PART is not a drawing
 }
 
 // runPlan is `panto plan PART --ratio R --cutter D [...]`.
@@ -31,28 +32,10 @@ func runPlan(args []string, stdout, stderr io.Writer) int {
 	var o planFlags
 	fl := pflag.NewFlagSet("plan", pflag.ContinueOnError)
 	fl.SetOutput(io.Discard)
-	fl.Float64Var(&o.ratio, "ratio", 0, "template size : part size")
-	fl.Float64Var(&o.cutter, "cutter", 0, "cutter diameter, mm")
-	fl.StringToStringVar(&o.cutterFor, "cutter-for", nil, "cutter for one kind of feature, KIND=MM")
-	fl.Float64Var(&o.stylus, "stylus", 0, "stylus diameter, mm")
-	fl.StringVar(&o.tip, "tip", "", "stylus tip: round or pointed")
-	fl.StringVar(&o.machine, "machine", "", "machine file")
-	fl.BoolVar(&o.mirror, "mirror", false, "mirror the template")
-	fl.Float64Var(&o.rotate, "rotate", 0, "turn the template, degrees counter-clockwise")
-	fl.BoolVar(&o.acceptLoss, "accept-loss", false, "plan even if some features are lost")
-	fl.BoolVar(&o.millHoles, "mill-holes", false, "mill holes larger than the cutter")
+	addPlanFlags(fl, &o)
 	fl.BoolVar(&o.asJSON, "json", false, "print the plan as JSON")
-	fl.BoolVarP(&o.help, "help", "h", false, "show help")
-	if err := fl.Parse(args); err != nil {
-		fmt.Fprintf(stderr, "panto plan: %v\nRun 'panto help plan' for usage.\n", err)
-		return exitUsage
-	}
-	if o.help {
-		return runHelp([]string{"plan"}, stdout, stderr)
-	}
-	if fl.NArg() != 1 {
-		fmt.Fprintf(stderr, "panto plan: give exactly one part file, got %d\nUsage: %s\n", fl.NArg(), planSynopsis)
-		return exitUsage
+	if code, done := parseOne("plan", partOrDrawing, planSynopsis, fl, args, &o.help, stdout, stderr); done {
+		return code
 	}
 	setup, err := o.setup(fl)
 	if err != nil {
@@ -64,32 +47,11 @@ func runPlan(args []string, stdout, stderr io.Writer) int {
 
 // plan reads the files, plans, prints and picks the exit code.
 func plan(path string, setup pantograph.Setup, o planFlags, stdout, stderr io.Writer) int {
-	part, err := readPartOrDrawing(path, drawing.Options{}, stderr)
-	if err != nil {
-		return reportReadError(err, stderr)
+	j, code, ok := readAndPlan("plan", path, o, setup, stderr)
+	if !ok {
+		return code
 	}
-	var m *pantograph.Machine
-	if o.machine != "" {
-		mm, err := partfile.ReadMachineFile(o.machine)
-		if err != nil {
-			fmt.Fprintf(stderr, "panto plan: %v\n", err)
-			return exitUsage
-		}
-		m = &mm
-	}
-	p, err := pantograph.PlanPart(part, setup, m)
-	var pe pantograph.PartErrors
-	switch {
-	case errors.As(err, &pe):
-		for _, pr := range pe {
-			fmt.Fprintln(stderr, pr.Error())
-		}
-		fmt.Fprintf(stderr, "panto plan: %s has errors; fix them first (panto check shows them all)\n", path)
-		return exitUsage
-	case err != nil:
-		fmt.Fprintf(stderr, "panto plan: %v\n", err)
-		return exitUsage
-	}
+	p := j.plan
 	if o.asJSON {
 		if err := planjson.Encode(stdout, p); err != nil {
 			fmt.Fprintf(stderr, "panto plan: %v\n", err)
@@ -121,13 +83,18 @@ func planExit(p pantograph.Plan, stderr io.Writer) int {
 	return exitFailed
 }
 
-// setup turns the flags into a Setup; Validate is left to the planner.
-func (o planFlags) setup(fl *pflag.FlagSet) (pantograph.Setup, error) {
+// setup turns the flags into a Setup, and notes which drawing flags were given; Validate is
+// left to the planner.
+func (o *planFlags) setup(fl *pflag.FlagSet) (pantograph.Setup, error) {
 	for _, name := range []string{"ratio", "cutter"} {
 		if !fl.Changed(name) {
 			return pantograph.Setup{}, fmt.Errorf("--%s is required\nUsage: %s", name, planSynopsis)
 		}
 	}
+	if err := checkThickness(o.thickness); err != nil {
+		return pantograph.Setup{}, err
+	}
+	o.drawingGiven = givenDrawingFlags(fl)
 	s := pantograph.Setup{Ratio: o.ratio, Cutter: o.cutter, Stylus: o.stylus,
 		Tip: pantograph.Tip(o.tip), Mirror: o.mirror, Rotate: geom.Degrees(o.rotate),
 		AcceptLoss: o.acceptLoss, MillHoles: o.millHoles}
@@ -336,11 +303,11 @@ func abs(v float64) float64 {
 // at formats a point to three decimals.
 func at(v geom.Vec) string { return point(v.X, v.Y) }
 
-const planSynopsis = `panto plan PART --ratio R --cutter D [--stylus D] [--machine FILE] [--mirror] [--rotate DEG] [--accept-loss] [--mill-holes] [--json]`
+const planSynopsis = `panto plan PART --ratio R --cutter D [--stylus D] [--machine FILE] [--mirror] [--rotate DEG] [--accept-loss] [--mill-holes] [--thickness MM] [--json]`
 
 const planUsage = `Usage: ` + planSynopsis + `
 
-Plans the template for the part file PART: the ratio, each feature with its cutter and stylus,
+Plans the template for PART, a part file or a DXF or SVG drawing: the ratio, each feature with its cutter and stylus,
 how far the template's edges are moved for a stylus that does not match the cutter, the
 template's overall size on the copy table, the order of work, and every warning about what
 will not come out as drawn.
@@ -376,7 +343,7 @@ Flags:
                        any mirror); 180 suits a linkage pivoted between stylus and cutter
   --accept-loss        plan even when the cutter cannot make some feature; it is left out
   --mill-holes         mill every hole larger than its cutter instead of drilling it
-  --json               print the plan as one JSON object instead:
+` + stockAndDrawingHelp + `  --json               print the plan as one JSON object instead:
                          part, file, ratio, mirror, rotate (degrees), datum [x, y] (part mm)
                          template {bounds {min, max}}             template mm
                          features [{name, kind, number, method, cutter, drill, stylus, tip,
@@ -392,6 +359,20 @@ Flags:
                                     stops}]
                          done    whether the plan can be carried out
   -h, --help           show this help
+`
+
+// stockAndDrawingHelp describes the flags for the stock and for reading a drawing, which plan,
+// sheet and make share.
+const stockAndDrawingHelp = `  --thickness MM       the stock's thickness in mm: needed for a drawing, which does not
+                       carry it; for a part file it replaces [stock] thickness (with a note)
+  --material NAME      the stock's material; for a part file it replaces [stock] material
+  When PART is a .dxf or .svg drawing it is read as 'panto import' reads it, and what became
+  what is reported on standard error; these say how (see 'panto help import'):
+  --units mm|in        the drawing's units, overriding the file
+  --hole-max D         largest circle that becomes a drilled hole, in the drawing's units
+  --layer NAME=KIND[:DEPTH]
+                       what the outlines on layer NAME are, e.g. --layer RECESS=pocket:0.3
+  --join MM            join ends this close together (default 0.001 mm)
 `
 
 // byNumber returns the indices of fs in working order, features left out of it last.

@@ -1,7 +1,6 @@
 package main
 
 import (
-	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -11,7 +10,6 @@ import (
 	"github.com/spf13/pflag"
 
 	"panto/pantograph"
-	"panto/pantograph/partfile"
 )
 
 // sheetFlags are the options of `panto sheet` beyond those it shares with `panto plan`.
@@ -34,16 +32,8 @@ func runSheet(args []string, stdout, stderr io.Writer) int {
 	fl.StringVar(&so.date, "date", "", "date printed on the sheet (default today)")
 	fl.BoolVar(&so.force, "force", false, "overwrite existing files")
 	fl.BoolVar(&so.print, "print", false, "also print the sheet on standard output")
-	if err := fl.Parse(args); err != nil {
-		fmt.Fprintf(stderr, "panto sheet: %v\nRun 'panto help sheet' for usage.\n", err)
-		return exitUsage
-	}
-	if o.help {
-		return runHelp([]string{"sheet"}, stdout, stderr)
-	}
-	if fl.NArg() != 1 {
-		fmt.Fprintf(stderr, "panto sheet: give exactly one part file, got %d\nUsage: %s\n", fl.NArg(), sheetSynopsis)
-		return exitUsage
+	if code, done := parseOne("sheet", partOrDrawing, sheetSynopsis, fl, args, &o.help, stdout, stderr); done {
+		return code
 	}
 	setup, err := o.setup(fl)
 	if err != nil {
@@ -53,56 +43,20 @@ func runSheet(args []string, stdout, stderr io.Writer) int {
 	if so.date == "" {
 		so.date = time.Now().UTC().Format("2006-01-02")
 	}
-	return sheetJob(fl.Arg(0), setup, o.machine, so, stdout, stderr)
-}
-
-// addPlanFlags registers the flags `panto sheet` shares with `panto plan`.
-func addPlanFlags(fl *pflag.FlagSet, o *planFlags) {
-	fl.Float64Var(&o.ratio, "ratio", 0, "template size : part size")
-	fl.Float64Var(&o.cutter, "cutter", 0, "cutter diameter, mm")
-	fl.StringToStringVar(&o.cutterFor, "cutter-for", nil, "cutter for one kind of feature, KIND=MM")
-	fl.Float64Var(&o.stylus, "stylus", 0, "stylus diameter, mm")
-	fl.StringVar(&o.tip, "tip", "", "stylus tip: round or pointed")
-	fl.StringVar(&o.machine, "machine", "", "machine file")
-	fl.BoolVar(&o.mirror, "mirror", false, "mirror the template")
-	fl.Float64Var(&o.rotate, "rotate", 0, "turn the template, degrees counter-clockwise")
-	fl.BoolVar(&o.acceptLoss, "accept-loss", false, "plan even if some features are lost")
-	fl.BoolVar(&o.millHoles, "mill-holes", false, "mill holes larger than the cutter")
-	fl.BoolVarP(&o.help, "help", "h", false, "show help")
+	return sheetJob(fl.Arg(0), setup, o, so, stdout, stderr)
 }
 
 // sheetJob reads, plans, and writes the sheet files.
-func sheetJob(path string, setup pantograph.Setup, machinePath string, so sheetFlags, stdout, stderr io.Writer) int {
-	part, err := partfile.ReadFile(path)
-	if err != nil {
-		return reportReadError(err, stderr)
+func sheetJob(path string, setup pantograph.Setup, o planFlags, so sheetFlags, stdout, stderr io.Writer) int {
+	j, code, ok := readAndPlan("sheet", path, o, setup, stderr)
+	if !ok {
+		return code
 	}
-	var m *pantograph.Machine
-	if machinePath != "" {
-		mm, err := partfile.ReadMachineFile(machinePath)
-		if err != nil {
-			fmt.Fprintf(stderr, "panto sheet: %v\n", err)
-			return exitUsage
-		}
-		m = &mm
-	}
-	p, err := pantograph.PlanPart(part, setup, m)
-	var pe pantograph.PartErrors
-	switch {
-	case errors.As(err, &pe):
-		for _, pr := range pe {
-			fmt.Fprintln(stderr, pr.Error())
-		}
-		fmt.Fprintf(stderr, "panto sheet: %s has errors; fix them first (panto check shows them all)\n", path)
-		return exitUsage
-	case err != nil:
-		fmt.Fprintf(stderr, "panto sheet: %v\n", err)
-		return exitUsage
-	}
+	p := j.plan
 	if !p.Done() {
 		return planExit(p, stderr)
 	}
-	files, err := sheetFiles(p, m, so.paper, so.date)
+	files, err := sheetFiles(p, j.machine, so.paper, so.date)
 	if err != nil {
 		fmt.Fprintf(stderr, "panto sheet: %v\n", err)
 		return exitUsage
@@ -174,9 +128,10 @@ func writeSheetFiles(dir string, files []sheetFile, force bool) error {
 
 const sheetUsage = `Usage: ` + sheetSynopsis + `
 
-Plans the part as 'panto plan' does (same flags: --ratio, --cutter, --cutter-for, --stylus,
---tip, --machine, --mirror, --rotate, --accept-loss, --mill-holes) and writes the dial-reading
-sheet for the machine into the folder --out:
+Plans PART, a part file or a DXF or SVG drawing, as 'panto plan' does (same flags: --ratio,
+--cutter, --cutter-for, --stylus, --tip, --machine, --mirror, --rotate, --accept-loss,
+--mill-holes, --thickness, --material, and --units, --hole-max, --layer, --join for a
+drawing) and writes the dial-reading sheet for the machine into the folder --out:
 
   sheet.pdf    to print, A4 or Letter (--paper), one block per step with a box to tick
   sheet.txt    the same as plain text (--print also shows it here)

@@ -1,0 +1,206 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"io"
+
+	"github.com/spf13/pflag"
+
+	"panto/pantograph"
+	"panto/pantograph/drawing"
+	"panto/pantograph/partfile"
+)
+
+// This file is what the commands that take a part share: their flags (declared here once), the
+// reading of a part file or a drawing, the stock given on the command line, and the plan.
+
+// drawingFlags say how to read a DXF or SVG drawing; import, plan, sheet and make all take them.
+type drawingFlags struct {
+	units   string
+	holeMax float64
+	layers  []string
+	join    float64
+}
+
+// givenDrawingFlags returns the drawing flags given on the command line, as --NAME.
+func givenDrawingFlags(fl *pflag.FlagSet) []string {
+	var given []string
+	for _, name := range []string{"units", "hole-max", "layer", "join"} {
+		if fl.Changed(name) {
+			given = append(given, "--"+name)
+		}
+	}
+	return given
+}
+
+// addDrawingFlags declares the flags of drawingFlags.
+func addDrawingFlags(fl *pflag.FlagSet, d *drawingFlags) {
+	fl.StringVar(&d.units, "units", "", "the drawing's units, mm or in, when the file does not say or says wrong")
+	fl.Float64Var(&d.holeMax, "hole-max", 0, "circles this diameter or smaller become drilled holes (drawing units)")
+	fl.StringArrayVar(&d.layers, "layer", nil, "NAME=KIND[:DEPTH]: what a layer's outlines are")
+	fl.Float64Var(&d.join, "join", 0, "join ends this close, in mm (default 0.001)")
+}
+
+// options checks the flags and turns them into drawing options, without the stock.
+func (d drawingFlags) options() (drawing.Options, error) {
+	opts := drawing.Options{HoleMax: d.holeMax, JoinTol: d.join, Layers: map[string]drawing.LayerRule{}}
+	switch pantograph.Units(d.units) {
+	case "", pantograph.MM, pantograph.Inch:
+		opts.Units = pantograph.Units(d.units)
+	default:
+		return opts, fmt.Errorf("--units must be mm or in, got %q", d.units)
+	}
+	if !(d.join >= 0 && d.join <= 1) {
+		return opts, fmt.Errorf("--join must be between 0 and 1 mm, got %g", d.join)
+	}
+	if !(d.holeMax >= 0) {
+		return opts, fmt.Errorf("--hole-max must be 0 or more, got %g", d.holeMax)
+	}
+	for _, l := range d.layers {
+		name, rule, err := drawing.ParseLayerRule(l)
+		if err != nil {
+			return opts, fmt.Errorf("--layer %v", err)
+		}
+		opts.Layers[name] = rule
+	}
+	return opts, nil
+}
+
+// maxThickness bounds --thickness: no stock on a pantograph mill is anywhere near a metre thick,
+// so a larger number is a slip of the keyboard (common practice, no source).
+const maxThickness = 1e6
+
+// checkThickness checks a --thickness value.
+func checkThickness(t float64) error {
+	if !(t >= 0 && t < maxThickness) {
+		return fmt.Errorf("--thickness must be 0 or more, got %g", t)
+	}
+	return nil
+}
+
+// addPlanFlags declares the flags that plan, sheet and make share: the setup, the machine, the
+// stock and how to read a drawing.
+func addPlanFlags(fl *pflag.FlagSet, o *planFlags) {
+	fl.Float64Var(&o.ratio, "ratio", 0, "template size : part size")
+	fl.Float64Var(&o.cutter, "cutter", 0, "cutter diameter, mm")
+	fl.StringToStringVar(&o.cutterFor, "cutter-for", nil, "cutter for one kind of feature, KIND=MM")
+	fl.Float64Var(&o.stylus, "stylus", 0, "stylus diameter, mm")
+	fl.StringVar(&o.tip, "tip", "", "stylus tip: round or pointed")
+	fl.StringVar(&o.machine, "machine", "", "machine file")
+	fl.BoolVar(&o.mirror, "mirror", false, "mirror the template")
+	fl.Float64Var(&o.rotate, "rotate", 0, "turn the template, degrees counter-clockwise")
+	fl.BoolVar(&o.acceptLoss, "accept-loss", false, "plan even if some features are lost")
+	fl.BoolVar(&o.millHoles, "mill-holes", false, "mill holes larger than the cutter")
+	fl.Float64Var(&o.thickness, "thickness", 0, "stock thickness, mm")
+	fl.StringVar(&o.material, "material", "", "stock material, e.g. brass")
+	addDrawingFlags(fl, &o.drawing)
+	fl.BoolVarP(&o.help, "help", "h", false, "show help")
+}
+
+// parseOne parses the flags of command cmd, which takes exactly one file (what names it in
+// messages). done is true when the command should stop with code: bad flags, or help shown.
+func parseOne(cmd, what, synopsis string, fl *pflag.FlagSet, args []string, help *bool,
+	stdout, stderr io.Writer) (code int, done bool) {
+	if err := fl.Parse(args); err != nil {
+		fmt.Fprintf(stderr, "panto %s: %v\nRun 'panto help %s' for usage.\n", cmd, err, cmd)
+		return exitUsage, true
+	}
+	if *help {
+		return runHelp([]string{cmd}, stdout, stderr), true
+	}
+	if fl.NArg() != 1 {
+		fmt.Fprintf(stderr, "panto %s: give exactly one %s, got %d\nUsage: %s\n", cmd, what, fl.NArg(), synopsis)
+		return exitUsage, true
+	}
+	return exitOK, false
+}
+
+// partOrDrawing is what the commands that plan take as PART.
+const partOrDrawing = "part file or drawing"
+
+// planned is a part read and planned, with the machine it was planned for.
+type planned struct {
+	part    pantograph.Part
+	plan    pantograph.Plan
+	machine *pantograph.Machine // nil without a machine file
+}
+
+// readAndPlan reads the part or drawing at path and the machine file, and plans. When it
+// fails it has said why on stderr, and ok is false with the exit code.
+func readAndPlan(cmd, path string, o planFlags, setup pantograph.Setup, stderr io.Writer) (j planned, code int, ok bool) {
+	part, code, ok := readPart(cmd, path, o, stderr)
+	if !ok {
+		return j, code, false
+	}
+	j.part = part
+	if o.machine != "" {
+		m, err := partfile.ReadMachineFile(o.machine)
+		if err != nil {
+			fmt.Fprintf(stderr, "panto %s: %v\n", cmd, err)
+			return j, exitUsage, false
+		}
+		j.machine = &m
+	}
+	p, err := pantograph.PlanPart(part, setup, j.machine)
+	var pe pantograph.PartErrors
+	switch {
+	case errors.As(err, &pe):
+		for _, pr := range pe {
+			fmt.Fprintln(stderr, pr.Error())
+		}
+		fmt.Fprintf(stderr, "panto %s: %s has errors; fix them first (panto check shows them all)\n", cmd, path)
+		return j, exitUsage, false
+	case err != nil:
+		fmt.Fprintf(stderr, "panto %s: %v\n", cmd, err)
+		return j, exitUsage, false
+	}
+	j.plan = p
+	return j, exitOK, true
+}
+
+// readPart reads a part file, or a drawing with the drawing flags (its report going to
+// stderr), and puts in the stock given by --thickness and --material.
+func readPart(cmd, path string, o planFlags, stderr io.Writer) (pantograph.Part, int, bool) {
+	isDrawing := drawing.IsDrawing(path)
+	if !isDrawing && len(o.drawingGiven) > 0 {
+		fmt.Fprintf(stderr, "panto %s: %s is for reading a drawing; %s is a part file\n", cmd, o.drawingGiven[0], path)
+		return pantograph.Part{}, exitUsage, false
+	}
+	opts, err := o.drawing.options()
+	if err != nil {
+		fmt.Fprintf(stderr, "panto %s: %v\n", cmd, err)
+		return pantograph.Part{}, exitUsage, false
+	}
+	part, err := readPartOrDrawing(path, opts, stderr)
+	if err != nil {
+		if isDrawing {
+			return part, reportDrawingError(err, stderr), false
+		}
+		return part, reportReadError(err, stderr), false
+	}
+	overrideStock(&part, o, isDrawing, stderr)
+	if isDrawing && part.Stock.Thickness == 0 {
+		fmt.Fprintf(stderr, "panto %s: %s: a drawing does not say how thick the stock is; give it with --thickness MM (and --material NAME)\n", cmd, path)
+		return part, exitUsage, false
+	}
+	return part, exitOK, true
+}
+
+// overrideStock puts the stock from the flags into the part. A drawing carries none; a part
+// file's [stock] is replaced, with a note, since the flag may be a slip.
+func overrideStock(part *pantograph.Part, o planFlags, isDrawing bool, stderr io.Writer) {
+	s := &part.Stock
+	if o.thickness > 0 {
+		if !isDrawing && s.Thickness > 0 && s.Thickness != o.thickness {
+			fmt.Fprintf(stderr, "note: --thickness %g mm replaces the part file's stock thickness (%g mm)\n", o.thickness, s.Thickness)
+		}
+		s.Thickness = o.thickness
+	}
+	if o.material != "" {
+		if !isDrawing && s.Material != "" && s.Material != o.material {
+			fmt.Fprintf(stderr, "note: --material %s replaces the part file's stock material (%s)\n", o.material, s.Material)
+		}
+		s.Material = o.material
+	}
+}
