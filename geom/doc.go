@@ -1,7 +1,8 @@
 // Package geom is panto's exact two-dimensional geometry: points, line and circular-arc
 // segments, closed contours, regions with holes, and the operations the rest of panto builds on
 // (area, containment, transforms, flattening, signed offset, union and difference, and measures
-// of how large a round tool can be to reach every part of a region).
+// of how large a round tool can be to reach every part of a region), and closed triangle meshes
+// of solids stepped up from those regions.
 //
 // geom knows nothing of machining; it imports only the standard library.
 //
@@ -39,6 +40,32 @@
 // segments shorter than pointTol as absent, arcs whose radius shrinks to pointTol or below as
 // vanished, and pieces of the result shorter than pointTol are dropped and their neighbours
 // joined.
+//
+// # Meshes
+//
+// A Mesh is the surface of a solid: triangles over shared points, each listing its corners
+// counter-clockwise as seen from outside, so that (b − a) × (c − a) is the outward normal and
+// Volume (the divergence theorem) is positive. Mesh.Check accepts a mesh only when it is closed
+// and consistently oriented, every directed edge used by exactly one triangle and its reverse
+// by exactly one other, and when no triangle has less than minTriangleArea (1e-9 mm², about
+// what float32 STL coordinates resolve on a part 300 mm across).
+//
+// Triangulate cuts a ring and its holes into triangles whose corners are input points only.
+// It cuts no ear less than earMinHeight (1e-4 mm, about twice the spacing of float32 numbers
+// near 1000) high over its longest side, nor of less than four times minTriangleArea: a
+// flatter triangle could turn over once its corners are rounded to float32 in a file. When no
+// corner qualifies, the ring is split along a diagonal; points on runs too nearly straight for
+// any ear are covered afterwards by fans across the sliver they leave, and only as a last
+// resort by ears of any height.
+//
+// StepSolid builds a stepped solid from nested Terraces. The root stands on the base height;
+// each child lies strictly inside its parent and apart from its siblings, and a vertical wall
+// joins it to its parent: up for a raised level, down for a sunk one, down to the base for an
+// Open one (which then has a hole in the bottom face), or a cone falling from the parent's
+// height to a point for a Cone. Each level's flat face is its outline less its children's.
+// Every outline is flattened once, and that one ring of points serves the face around it, its
+// own face and the wall between, so the faces share points exactly and the mesh closes without
+// repair. Extrude is the simplest case: one level with its holes open.
 //
 // Bad input is reported as an error from Validate naming the contour and segment index; geom
 // panics only when one of its own invariants is broken.
