@@ -16,11 +16,13 @@ Usage:
   panto import DRAWING [-o PART.toml] [...]   make a part file from a DXF or SVG drawing
   panto sheet PART --ratio R --cutter D [...] write the dial-reading sheet (PDF, text, CSV, JSON)
   panto make PART --ratio R --cutter D -o DIR write the template plate (STL), sheet and drawings
+                                              (SVG, PDF, and DXF for a laser or CNC router)
   panto help [COMMAND]                        show this help, or a command's help
   panto --version                             show panto's version
 
 A part file is a TOML description of the part in its own drawing units: see the files in
-samples/ for whole examples, and 'panto help check' for what check reports.
+samples/ for whole examples, and 'panto help check' for what check reports. plan, sheet and
+make also take a DXF or SVG drawing as PART, with --thickness MM for the stock.
 
 Exit codes: 0 done (warnings may be printed), 1 the job could not be done,
 2 bad usage or a bad part file.

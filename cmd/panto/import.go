@@ -2,10 +2,8 @@ package main
 
 import (
 	"bytes"
-	"errors"
 	"fmt"
 	"io"
-	"io/fs"
 	"os"
 	"path/filepath"
 	"strings"
@@ -80,7 +78,7 @@ func importDrawing(path string, o importFlags, opts drawing.Options, stdout, std
 	}
 	part, rep, err := drawing.ReadFile(path, opts)
 	if err != nil {
-		return reportDrawingError(err, stderr)
+		return reportFileError("import", "drawing", err, stderr)
 	}
 	rep.WriteTo(stdout)
 	var buf bytes.Buffer
@@ -111,17 +109,6 @@ func importHeader(path string, rep drawing.Report) []string {
 		h = append(h, "Warning: "+strings.ReplaceAll(w, "\n", " "))
 	}
 	return h
-}
-
-// reportDrawingError explains why a drawing could not be read.
-func reportDrawingError(err error, stderr io.Writer) int {
-	var pe *fs.PathError
-	if errors.As(err, &pe) {
-		fmt.Fprintf(stderr, "panto import: cannot read the drawing: %v\n", err)
-		return exitUsage
-	}
-	fmt.Fprintln(stderr, err)
-	return exitUsage
 }
 
 // writeFileAtomic writes data to a temporary file beside path and renames it into place, so

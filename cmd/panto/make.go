@@ -4,7 +4,6 @@ import (
 	"bytes"
 	"fmt"
 	"io"
-	"time"
 
 	"github.com/spf13/pflag"
 
@@ -16,9 +15,9 @@ const makeSynopsis = "panto make PART --ratio R --cutter D [--machine FILE] [--s
 
 // makeFlags are the options of `panto make` beyond those it shares with `panto plan`.
 type makeFlags struct {
-	out, paper, date, seat, style string
-	fixingSpacing, kerf           float64
-	force                         bool
+	outputFlags
+	seat, style         string
+	fixingSpacing, kerf float64
 }
 
 // makeJob is everything `panto make` knows when it makes its files.
@@ -49,14 +48,11 @@ func runMake(args []string, stdout, stderr io.Writer) int {
 	fl := pflag.NewFlagSet("make", pflag.ContinueOnError)
 	fl.SetOutput(io.Discard)
 	addPlanFlags(fl, &o)
-	fl.StringVarP(&mo.out, "out", "o", "", "folder to write into")
+	addOutputFlags(fl, &mo.outputFlags, "")
 	fl.StringVar(&mo.seat, "seat", "", "seats for drilled holes: cone or bore")
 	fl.StringVar(&mo.style, "style", "wall", "how traced edges are made: wall or groove")
 	fl.Float64Var(&mo.fixingSpacing, "fixing-spacing", 0, "distance between fixing slots, mm")
 	fl.Float64Var(&mo.kerf, "kerf", 0, "width the laser or router cuts, mm, for template.dxf")
-	fl.StringVar(&mo.paper, "paper", "a4", "paper size: a4 or letter")
-	fl.StringVar(&mo.date, "date", "", "date printed on the sheet (default today)")
-	fl.BoolVar(&mo.force, "force", false, "overwrite existing files")
 	if code, done := parseOne("make", partOrDrawing, makeSynopsis, fl, args, &o.help, stdout, stderr); done {
 		return code
 	}
@@ -72,9 +68,7 @@ func runMake(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "panto make: %v\n", err)
 		return exitUsage
 	}
-	if mo.date == "" {
-		mo.date = time.Now().UTC().Format("2006-01-02")
-	}
+	mo.dateToday()
 	return makeAll(fl.Arg(0), setup, o, mo, plate, stdout, stderr)
 }
 

@@ -38,12 +38,8 @@ func makeDXFFiles(part pantograph.Part, p pantograph.Plan, kerf float64) ([]shee
 	if err != nil {
 		return nil, err
 	}
-	var t, pt bytes.Buffer
-	if err := dxf.Encode(&t, tmpl); err != nil {
-		return nil, err
-	}
-	if err := dxf.Encode(&pt, dxf.PartDrawing(part)); err != nil {
-		return nil, err
-	}
-	return []sheetFile{{name: "template.dxf", data: t.Bytes()}, {name: "part.dxf", data: pt.Bytes()}}, nil
+	return encodeFiles([]fileEncoder{
+		{"template.dxf", func(b *bytes.Buffer) error { return dxf.Encode(b, tmpl) }},
+		{"part.dxf", func(b *bytes.Buffer) error { return dxf.Encode(b, dxf.PartDrawing(part)) }},
+	})
 }

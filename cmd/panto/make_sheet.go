@@ -40,23 +40,12 @@ func sheetFiles(p pantograph.Plan, m *pantograph.Machine, paperName, date string
 		mc = *m
 	}
 	s := pantograph.BuildSheet(p, mc, pantograph.SheetOptions{Date: date})
-	var out []sheetFile
-	for _, f := range []struct {
-		name string
-		enc  func(*bytes.Buffer) error
-	}{
+	return encodeFiles([]fileEncoder{
 		{"sheet.pdf", func(b *bytes.Buffer) error { return sheet.EncodePDF(b, s, paper) }},
 		{"sheet.csv", func(b *bytes.Buffer) error { return sheet.EncodeCSV(b, s) }},
 		{"sheet.json", func(b *bytes.Buffer) error { return sheet.EncodeJSON(b, s) }},
 		{"sheet.txt", func(b *bytes.Buffer) error { return sheet.EncodeText(b, s) }},
-	} {
-		var b bytes.Buffer
-		if err := f.enc(&b); err != nil {
-			return nil, fmt.Errorf("%s: %w", f.name, err)
-		}
-		out = append(out, sheetFile{f.name, b.Bytes()})
-	}
-	return out, nil
+	})
 }
 
 // drawingFiles returns template.svg, template.pdf, part.svg and part.pdf.
@@ -65,16 +54,24 @@ func drawingFiles(part pantograph.Part, p pantograph.Plan, paperName string) ([]
 	if err != nil {
 		return nil, fmt.Errorf("--paper: %v", err)
 	}
-	var out []sheetFile
-	for _, f := range []struct {
-		name string
-		enc  func(*bytes.Buffer) error
-	}{
+	return encodeFiles([]fileEncoder{
 		{"template.svg", func(b *bytes.Buffer) error { return drawing.EncodeTemplateSVG(b, p) }},
 		{"template.pdf", func(b *bytes.Buffer) error { return drawing.EncodeTemplatePDF(b, p, paper) }},
 		{"part.svg", func(b *bytes.Buffer) error { return drawing.EncodePartSVG(b, part, p, paper) }},
 		{"part.pdf", func(b *bytes.Buffer) error { return drawing.EncodePartPDF(b, part, p, paper) }},
-	} {
+	})
+}
+
+// fileEncoder is one file to make: its name and what writes its bytes.
+type fileEncoder struct {
+	name string
+	enc  func(*bytes.Buffer) error
+}
+
+// encodeFiles makes each file in order; an error names the file.
+func encodeFiles(fs []fileEncoder) ([]sheetFile, error) {
+	out := make([]sheetFile, 0, len(fs))
+	for _, f := range fs {
 		var b bytes.Buffer
 		if err := f.enc(&b); err != nil {
 			return nil, fmt.Errorf("%s: %w", f.name, err)

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"io/fs"
 
 	"github.com/spf13/pflag"
 
@@ -174,10 +175,11 @@ func readPart(cmd, path string, o planFlags, stderr io.Writer) (pantograph.Part,
 	}
 	part, err := readPartOrDrawing(path, opts, stderr)
 	if err != nil {
+		what := "part file"
 		if isDrawing {
-			return part, reportDrawingError(err, stderr), false
+			what = "drawing"
 		}
-		return part, reportReadError(err, stderr), false
+		return part, reportFileError(cmd, what, err, stderr), false
 	}
 	overrideStock(&part, o, isDrawing, stderr)
 	if isDrawing && part.Stock.Thickness == 0 {
@@ -203,4 +205,16 @@ func overrideStock(part *pantograph.Part, o planFlags, isDrawing bool, stderr io
 		}
 		s.Material = o.material
 	}
+}
+
+// reportFileError explains why the part file or drawing (what) could not be read: a file that
+// cannot be opened is named with the command; a bad file's error already names file and line.
+func reportFileError(cmd, what string, err error, stderr io.Writer) int {
+	var pe *fs.PathError
+	if errors.As(err, &pe) {
+		fmt.Fprintf(stderr, "panto %s: cannot read the %s: %v\n", cmd, what, err)
+		return exitUsage
+	}
+	fmt.Fprintln(stderr, err)
+	return exitUsage
 }

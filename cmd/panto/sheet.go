@@ -14,8 +14,30 @@ import (
 
 // sheetFlags are the options of `panto sheet` beyond those it shares with `panto plan`.
 type sheetFlags struct {
+	outputFlags
+	print bool
+}
+
+// outputFlags are the options of sheet and make for the files they write.
+type outputFlags struct {
 	out, paper, date string
-	force, print     bool
+	force            bool
+}
+
+// addOutputFlags declares the flags of outputFlags; out is the folder written into when -o is
+// not given ("" when -o is required).
+func addOutputFlags(fl *pflag.FlagSet, o *outputFlags, out string) {
+	fl.StringVarP(&o.out, "out", "o", out, "folder to write into")
+	fl.StringVar(&o.paper, "paper", "a4", "paper size: a4 or letter")
+	fl.StringVar(&o.date, "date", "", "date printed on the sheet (default today)")
+	fl.BoolVar(&o.force, "force", false, "overwrite existing files")
+}
+
+// dateToday puts today's date, UTC, on the sheet when --date was not given.
+func (o *outputFlags) dateToday() {
+	if o.date == "" {
+		o.date = time.Now().UTC().Format("2006-01-02")
+	}
 }
 
 const sheetSynopsis = "panto sheet PART --ratio R --cutter D [--machine FILE] [--out DIR] [--paper a4|letter] [--print] [--force]"
@@ -27,10 +49,7 @@ func runSheet(args []string, stdout, stderr io.Writer) int {
 	fl := pflag.NewFlagSet("sheet", pflag.ContinueOnError)
 	fl.SetOutput(io.Discard)
 	addPlanFlags(fl, &o)
-	fl.StringVarP(&so.out, "out", "o", ".", "folder to write the sheet into")
-	fl.StringVar(&so.paper, "paper", "a4", "paper size: a4 or letter")
-	fl.StringVar(&so.date, "date", "", "date printed on the sheet (default today)")
-	fl.BoolVar(&so.force, "force", false, "overwrite existing files")
+	addOutputFlags(fl, &so.outputFlags, ".")
 	fl.BoolVar(&so.print, "print", false, "also print the sheet on standard output")
 	if code, done := parseOne("sheet", partOrDrawing, sheetSynopsis, fl, args, &o.help, stdout, stderr); done {
 		return code
@@ -40,9 +59,7 @@ func runSheet(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "panto sheet: %v\n", err)
 		return exitUsage
 	}
-	if so.date == "" {
-		so.date = time.Now().UTC().Format("2006-01-02")
-	}
+	so.dateToday()
 	return sheetJob(fl.Arg(0), setup, o, so, stdout, stderr)
 }
 
