@@ -388,6 +388,9 @@ func FuzzReadMachine(f *testing.F) {
 				t.Fatalf("cutter without a size: %+v", c)
 			}
 		}
+		if f := m.Fixing; f.Spacing.X < 0 || f.Spacing.Y < 0 || f.Size < 0 || f.Size > maxFixingSize {
+			t.Fatalf("fixing out of range: %+v", f)
+		}
 	})
 }
 
