@@ -11,6 +11,7 @@ import (
 
 	"panto/geom"
 	"panto/pantograph"
+	"panto/pantograph/partfile"
 )
 
 // renderMesh draws m seen from above and in front, turned by yaw about Z and tipped by pitch,
@@ -93,9 +94,19 @@ func TestRenderPlates(t *testing.T) {
 		t.Skip("set PANTO_PLATE_PNG to a folder to get pictures of the sample plates")
 	}
 	writeLetteringPNG(t, filepath.Join(dir, "lettering.png"))
+	// the bench machine spaces the fixing slots from its file
+	bench, err := partfile.ReadMachineFile(filepath.Join("..", "samples", "machines", "bench-pantograph.machine.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
 	for _, name := range []string{"calibration-coupon.toml", "clock-bridge.toml", "pump-port-plate.toml"} {
-		for _, o := range []pantograph.PlateOptions{{}, {Style: pantograph.StyleGroove, Seat: pantograph.SeatCone}} {
-			pl, err := pantograph.BuildPlate(samplePlan(t, name, ""), nil, o)
+		for _, v := range []struct {
+			o    pantograph.PlateOptions
+			m    *pantograph.Machine
+			name string
+		}{{name: "wall"}, {o: pantograph.PlateOptions{Style: pantograph.StyleGroove, Seat: pantograph.SeatCone}, name: "groove"},
+			{m: &bench, name: "bench"}} {
+			pl, err := pantograph.BuildPlate(samplePlan(t, name, ""), v.m, v.o)
 			if err != nil {
 				t.Fatal(err)
 			}
@@ -103,7 +114,7 @@ func TestRenderPlates(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			f, err := os.Create(filepath.Join(dir, name+"."+string(pl.Style)+".png"))
+			f, err := os.Create(filepath.Join(dir, name+"."+v.name+".png"))
 			if err != nil {
 				t.Fatal(err)
 			}
@@ -111,7 +122,7 @@ func TestRenderPlates(t *testing.T) {
 				t.Fatal(err)
 			}
 			f.Close()
-			f, err = os.Create(filepath.Join(dir, name+"."+string(pl.Style)+".top.png"))
+			f, err = os.Create(filepath.Join(dir, name+"."+v.name+".top.png"))
 			if err != nil {
 				t.Fatal(err)
 			}
