@@ -172,8 +172,9 @@ Flags:
                           to engrave) or ignore; DEPTH in the drawing's units, e.g.
                           --layer RECESS=pocket:0.3  --layer CENTRES=ignore
   --join MM               join ends this close together (default 0.001 mm)
-  --thickness T           the stock's thickness, in the drawing's units (drawings do not
-                          carry it; panto check and plan need it)
+  --thickness T           the stock's thickness, in the drawing's units, as the part file
+                          keeps it (drawings do not carry it; panto check and plan need it;
+                          plan, sheet and make given a drawing take --thickness in mm)
   --material NAME         the stock's material, for the part file
   --force                 overwrite the part file if it exists
   -h, --help              show this help

@@ -56,7 +56,7 @@ func TestMakeSamples(t *testing.T) {
 						t.Errorf("report lacks %q:\n%s", frag, stdout)
 					}
 				}
-				for _, name := range []string{"sheet.txt", "template.svg"} {
+				for _, name := range []string{"sheet.txt", "template.svg", "template.dxf", "part.dxf"} {
 					if _, err := os.Stat(filepath.Join(dir, name)); err != nil {
 						t.Errorf("%s not written: %v", name, err)
 					}
@@ -104,6 +104,8 @@ func TestMakeUsage(t *testing.T) {
 	}{
 		{"help", []string{"make", "-h"}, exitOK, "Usage: panto make"},
 		{"help command", []string{"help", "make"}, exitOK, "--style wall|groove"},
+		{"help on DXF", []string{"help", "make"}, exitOK, "template.dxf   the template for cutting on a laser or CNC router"},
+		{"help on kerf", []string{"make", "--help"}, exitOK, "--kerf MM"},
 		{"no part", []string{"make", "-o", dir}, exitUsage, "give exactly one part file"},
 		{"no folder", []string{"make", "p.toml", "--ratio", "10", "--cutter", "0.5"}, exitUsage, "-o DIR is required"},
 		{"no ratio", []string{"make", "p.toml", "--cutter", "0.5", "-o", dir}, exitUsage, "--ratio is required"},

@@ -35,6 +35,9 @@ func TestDrawingAsPart(t *testing.T) {
 		// --thickness is in mm whatever the drawing's units: the inch drawing's stock is 1 mm.
 		{"inch drawing, layers", []string{"plan", drawings + "calibration-coupon-in.dxf", "--thickness", "1", "--material", "brass",
 			"--layer", "CENTRE=ignore", "--layer", "RECESS=pocket:0.01"}, exitOK, "brass, 1 mm thick", "$INSUNITS 1 (inches)"},
+		// The fixture's recess is a group of its own; mapped, it is a pocket 0.3 mm deep.
+		{"SVG layer mapped", []string{"plan", drawings + "pump-port-plate.svg", "--thickness", "0.8", "--layer", "recess=pocket:0.3"},
+			exitOK, "0.3 mm deep", "[[pocket]]"},
 		{"part file, stock replaced", []string{"plan", sample, "--thickness", "1", "--material", "steel"}, exitOK,
 			"stock       steel, 1 mm thick", "note: --thickness 1 mm replaces the part file's stock thickness (1.2 mm)"},
 		{"missing part file", []string{"plan", "nosuch.toml"}, exitUsage, "", "panto plan: cannot read the part file"},
