@@ -128,7 +128,7 @@ func machineWarnings(p Plan, m *Machine) []PlanWarning {
 	}
 	if b := m.Printer.Bed; b.X > 0 && b.Y > 0 && !fits(size, b) {
 		ws = append(ws, PlanWarning{Message: fmt.Sprintf(
-			"the template is %s x %s mm, larger than the printer bed (%s x %s mm): print it in pieces or cut it from sheet",
+			"the template alone is %s x %s mm, larger than the printer bed (%s x %s mm), and the plate adds margins, fixing slots and a front strip: print it in pieces or cut it from sheet",
 			num(size.X), num(size.Y), num(b.X), num(b.Y))})
 	}
 	return ws

@@ -146,12 +146,12 @@ func plateWriter(j makeJob, report io.Writer) ([]sheetFile, error) {
 	if err := stl.Encode(&b, m, "panto template plate: "+j.plan.Part); err != nil {
 		return nil, err
 	}
-	writePlateReport(report, pl, len(m.Triangles), j.machine)
+	writePlateReport(report, pl, len(m.Triangles))
 	return []sheetFile{{"template.stl", b.Bytes()}}, nil
 }
 
 // writePlateReport tells the machinist what was made and how to print it.
-func writePlateReport(w io.Writer, pl pantograph.Plate, triangles int, m *pantograph.Machine) {
+func writePlateReport(w io.Writer, pl pantograph.Plate, triangles int) {
 	x, y := pl.Size.X*pl.ScaleX, pl.Size.Y*pl.ScaleY
 	fmt.Fprintf(w, "template.stl: plate %.1f × %.1f × %.1f mm, %d triangles\n", x, y, pl.Height, triangles)
 	fmt.Fprintf(w, "  traced edges: %s, %.1f mm high; seats: %s", styleWords(pl.Style), pl.WallHeight, pl.Seat)
@@ -162,12 +162,8 @@ func writePlateReport(w io.Writer, pl pantograph.Plate, triangles int, m *pantog
 	if pl.ScaleX != 1 || pl.ScaleY != 1 {
 		fmt.Fprintf(w, "  printer scale correction applied: X × %g, Y × %g\n", pl.ScaleX, pl.ScaleY)
 	}
-	if m != nil && m.Printer.Bed.X > 0 && m.Printer.Bed.Y > 0 {
-		fits := x <= m.Printer.Bed.X && y <= m.Printer.Bed.Y || y <= m.Printer.Bed.X && x <= m.Printer.Bed.Y
-		if !fits {
-			fmt.Fprintf(w, "  note: the plate is larger than the printer's bed (%g × %g mm): print it elsewhere, or use a lower ratio\n",
-				m.Printer.Bed.X, m.Printer.Bed.Y)
-		}
+	if pl.BedWarning != "" {
+		fmt.Fprintf(w, "  warning: %s\n", pl.BedWarning)
 	}
 	for _, n := range pl.Notes {
 		fmt.Fprintf(w, "  note: %s\n", n)
@@ -208,8 +204,8 @@ drawing) and writes into the folder DIR everything needed at the machine:
                  SEATS, GROOVES, LABELS), arcs kept as arcs
   part.dxf       the part at true size, a layer per kind of feature
 
-The plate is a flat base with a fixing slot at each corner (or a pair each side
---fixing-spacing apart) and a front strip with the title, a check bar and a test square.
+The plate is a flat base with a fixing slot at each corner, or pairs of slots at the machine
+file's [copy_table] fixing_spacing (--fixing-spacing overrides its X spacing), and a front strip with the title, a check bar and a test square.
 With --style wall (the default) the profile stands up as an island the stylus runs round,
 and openings and pockets are sunk into it; edges stand one stylus diameter high, and at
 least 3 mm, so a round-nosed stylus bears on its straight side and cannot ride over. With
@@ -234,7 +230,8 @@ Flags (besides the plan flags):
   -o, --out DIR              folder to write into (required)
       --seat cone|bore       seats for drilled holes (default: cone for a pointed stylus)
       --style wall|groove    raised walls or channels for traced edges (default wall)
-      --fixing-spacing MM    distance between fixing slots along X (default: at the corners)
+      --fixing-spacing MM    distance between fixing slots along X (default: the machine
+                             file's fixing_spacing, else a slot at each corner)
       --kerf MM              width the laser or router cuts, allowed for in template.dxf
                              (default 0: none)
       --paper a4|letter      paper size of the PDFs (default a4)
