@@ -2,7 +2,6 @@ package geom
 
 import (
 	"math"
-	"sort"
 )
 
 // crossing is one point shared by two segments, with its parameter on each.
@@ -152,31 +151,10 @@ outer:
 	return out
 }
 
-// boxPairs returns every pair (i, j), i < j, of boxes that overlap, by sorting on the left edge
-// and sweeping: O(n log n + pairs) rather than O(n²).
+// boxPairs returns every pair (i, j), i < j, of boxes that overlap (see eachBoxPair).
 func boxPairs(boxes []Box) [][2]int {
-	idx := make([]int, len(boxes))
-	for i := range idx {
-		idx[i] = i
-	}
-	sort.Slice(idx, func(a, b int) bool { return boxes[idx[a]].Min.X < boxes[idx[b]].Min.X })
 	var pairs [][2]int
-	var active []int
-	for _, i := range idx {
-		keep := active[:0]
-		for _, j := range active {
-			if boxes[j].Max.X >= boxes[i].Min.X {
-				keep = append(keep, j)
-			}
-		}
-		active = keep
-		for _, j := range active {
-			if boxes[i].Overlaps(boxes[j]) {
-				pairs = append(pairs, [2]int{min(i, j), max(i, j)})
-			}
-		}
-		active = append(active, i)
-	}
+	eachBoxPair(boxes, func(i, j int) { pairs = append(pairs, [2]int{i, j}) })
 	return pairs
 }
 
