@@ -454,45 +454,9 @@ func segDist2(s Segment, p Vec) float64 {
 }
 
 // nearerThan reports whether some indexed segment passes strictly nearer than r to p. It
-// descends into the nearer child first, so a piece that is too near is usually found out at
-// the first leaf it reaches.
+// stops at the first such segment; the search descends into the nearer child first, so a
+// piece that is too near is usually found out at the first leaf it reaches.
 func (x *segIndex) nearerThan(p Vec, r float64) bool {
-	if len(x.segs) == 0 || r <= 0 {
-		return false
-	}
-	r2 := r * r
-	type node struct{ level, i int }
-	var buf [64]node // depth first holds at most one waiting node per level: no allocation
-	stack := buf[:0]
-	if top := len(x.levels) - 1; boxDist2(x.levels[top][0], p) < r2 {
-		stack = append(stack, node{top, 0})
-	}
-	for len(stack) > 0 {
-		n := stack[len(stack)-1]
-		stack = stack[:len(stack)-1]
-		if n.level == 0 {
-			for _, s := range x.segs[n.i*segIndexLeaf : min(len(x.segs), (n.i+1)*segIndexLeaf)] {
-				if segDist2(s, p) < r2 {
-					return true
-				}
-			}
-			continue
-		}
-		lv, a := x.levels[n.level-1], 2*n.i
-		da, db := boxDist2(lv[a], p), math.Inf(1)
-		if a+1 < len(lv) {
-			db = boxDist2(lv[a+1], p)
-		}
-		near, far, dn, df := a, a+1, da, db
-		if db < da {
-			near, far, dn, df = a+1, a, db, da
-		}
-		if df < r2 {
-			stack = append(stack, node{n.level - 1, far})
-		}
-		if dn < r2 {
-			stack = append(stack, node{n.level - 1, near})
-		}
-	}
-	return false
+	_, ok := x.search(p, r, true)
+	return ok
 }

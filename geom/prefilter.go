@@ -318,7 +318,11 @@ func (f *prefilter) ringSpans(s curve, w Segment) spans {
 
 // nearestWithin returns the index of the indexed segment nearest to p, when one passes
 // strictly nearer than r.
-func (x *segIndex) nearestWithin(p Vec, r float64) (int, bool) {
+func (x *segIndex) nearestWithin(p Vec, r float64) (int, bool) { return x.search(p, r, false) }
+
+// search walks the box tree for segments passing strictly nearer than r to p, nearer child
+// first, and returns the nearest it finds — or, with first set, the first it finds.
+func (x *segIndex) search(p Vec, r float64, first bool) (int, bool) {
 	if len(x.segs) == 0 || r <= 0 {
 		return 0, false
 	}
@@ -342,6 +346,9 @@ func (x *segIndex) nearestWithin(p Vec, r float64) (int, bool) {
 			for k := n.i * segIndexLeaf; k < min(len(x.segs), (n.i+1)*segIndexLeaf); k++ {
 				if d2 := segDist2(x.segs[k], p); d2 < best {
 					best, found = d2, k
+					if first {
+						return k, true
+					}
 				}
 			}
 			continue
