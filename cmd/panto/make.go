@@ -192,8 +192,8 @@ const makeUsage = `Usage: ` + makeSynopsis + `
 
 Plans PART, a part file or a DXF or SVG drawing, as 'panto plan' does (same flags: --ratio,
 --cutter, --cutter-for, --stylus, --tip, --machine, --mirror, --rotate, --accept-loss,
---mill-holes, --thickness, --material, and --units, --hole-max, --layer, --join for a
-drawing) and writes into the folder DIR everything needed at the machine:
+--mill-holes, --datum, --thickness, --material, and --units, --hole-max, --layer, --join
+for a drawing) and writes into the folder DIR everything needed at the machine:
 
   template.stl   the template plate to print (binary STL, mm, all coordinates positive)
   sheet.*        the dial-reading sheet (PDF, text, CSV, JSON), as 'panto sheet' writes it

@@ -8,6 +8,7 @@ import (
 
 	"github.com/spf13/pflag"
 
+	"panto/geom"
 	"panto/pantograph"
 	"panto/pantograph/drawing"
 	"panto/pantograph/partfile"
@@ -95,6 +96,7 @@ func addPlanFlags(fl *pflag.FlagSet, o *planFlags) {
 	fl.BoolVar(&o.millHoles, "mill-holes", false, "mill holes larger than the cutter")
 	fl.Float64Var(&o.thickness, "thickness", 0, "stock thickness, mm")
 	fl.StringVar(&o.material, "material", "", "stock material, e.g. brass")
+	fl.Float64SliceVar(&o.datum, "datum", nil, "X,Y: move the datum to this point, in the part's own units")
 	addDrawingFlags(fl, &o.drawing)
 	fl.BoolVarP(&o.help, "help", "h", false, "show help")
 }
@@ -182,6 +184,10 @@ func readPart(cmd, path string, o planFlags, stderr io.Writer) (pantograph.Part,
 		return part, reportFileError(cmd, what, err, stderr), false
 	}
 	overrideStock(&part, o, isDrawing, stderr)
+	if err := moveDatum(&part, o.datum); err != nil {
+		fmt.Fprintf(stderr, "panto %s: %v\n", cmd, err)
+		return part, exitUsage, false
+	}
 	if isDrawing && part.Stock.Thickness == 0 {
 		fmt.Fprintf(stderr, "panto %s: %s: a drawing does not say how thick the stock is; give it with --thickness MM (and --material NAME)\n", cmd, path)
 		return part, exitUsage, false
@@ -205,6 +211,28 @@ func overrideStock(part *pantograph.Part, o planFlags, isDrawing bool, stderr io
 		}
 		s.Material = o.material
 	}
+}
+
+// moveDatum puts the datum where --datum says: a point of the part frame in the part's own
+// drawing units, as the part file's datum key is written. Moving the datum moves every dial
+// reading, so a machinist can put it on a seat that suits the machine or keep readings positive.
+func moveDatum(part *pantograph.Part, xy []float64) error {
+	if xy == nil {
+		return nil
+	}
+	if len(xy) != 2 {
+		return fmt.Errorf("--datum takes two numbers, X,Y; got %d", len(xy))
+	}
+	k := 1.0
+	if part.Units == pantograph.Inch {
+		k = pantograph.MMPerInch
+	}
+	d := geom.V(xy[0]*k, xy[1]*k)
+	if !d.IsFinite() {
+		return fmt.Errorf("--datum must be two numbers, got %v", xy)
+	}
+	part.Datum = d
+	return nil
 }
 
 // reportFileError explains why the part file or drawing (what) could not be read: a file that

@@ -24,7 +24,8 @@ type planFlags struct {
 	thickness                     float64 // stock, mm; 0 keeps the part file's
 	material                      string
 	drawing                       drawingFlags
-	drawingGiven                  []string // the drawing flags given, for a word when PART is not a drawing
+	drawingGiven                  []string  // the drawing flags given, for a word when PART is not a drawing
+	datum                         []float64 // --datum X,Y in the part's own units; empty keeps the file's
 }
 
 // runPlan is `panto plan PART --ratio R --cutter D [...]`.
@@ -303,7 +304,7 @@ func abs(v float64) float64 {
 // at formats a point to three decimals.
 func at(v geom.Vec) string { return point(v.X, v.Y) }
 
-const planSynopsis = `panto plan PART --ratio R --cutter D [--stylus D] [--machine FILE] [--mirror] [--rotate DEG] [--accept-loss] [--mill-holes] [--thickness MM] [--json]`
+const planSynopsis = `panto plan PART --ratio R --cutter D [--stylus D] [--machine FILE] [--mirror] [--rotate DEG] [--accept-loss] [--mill-holes] [--datum X,Y] [--thickness MM] [--json]`
 
 const planUsage = `Usage: ` + planSynopsis + `
 
@@ -363,7 +364,9 @@ Flags:
 
 // stockAndDrawingHelp describes the flags for the stock and for reading a drawing, which plan,
 // sheet and make share.
-const stockAndDrawingHelp = `  --thickness MM       the stock's thickness in mm: needed for a drawing, which does not
+const stockAndDrawingHelp = `  --datum X,Y          move the datum (where the dials are zeroed) to this point of the part,
+                       in the part's own units; every reading is measured from it
+  --thickness MM       the stock's thickness in mm: needed for a drawing, which does not
                        carry it; for a part file it replaces [stock] thickness (with a note)
   --material NAME      the stock's material; for a part file it replaces [stock] material
   When PART is a .dxf or .svg drawing it is read as 'panto import' reads it, and what became

@@ -147,8 +147,8 @@ const sheetUsage = `Usage: ` + sheetSynopsis + `
 
 Plans PART, a part file or a DXF or SVG drawing, as 'panto plan' does (same flags: --ratio,
 --cutter, --cutter-for, --stylus, --tip, --machine, --mirror, --rotate, --accept-loss,
---mill-holes, --thickness, --material, and --units, --hole-max, --layer, --join for a
-drawing) and writes the dial-reading sheet for the machine into the folder --out:
+--mill-holes, --datum, --thickness, --material, and --units, --hole-max, --layer, --join
+for a drawing) and writes the dial-reading sheet for the machine into the folder --out:
 
   sheet.pdf    to print, A4 or Letter (--paper), one block per step with a box to tick
   sheet.txt    the same as plain text (--print also shows it here)
