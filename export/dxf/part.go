@@ -6,17 +6,19 @@ import (
 
 	"panto/geom"
 	"panto/pantograph"
+	"panto/pantograph/drawing"
 )
 
 // The layers of a part drawing, one per kind of feature so that a CAD program can show, hide
-// or colour them apart.
+// or colour them apart. The names live in package drawing, which reads them back as default
+// layer rules, so that panto imports its own part drawings as written.
 const (
-	LayerProfile = "PROFILE"
-	LayerCutouts = "CUTOUTS"
-	LayerPockets = "POCKETS"
-	LayerHoles   = "HOLES"
-	LayerGrooves = "GROOVES"
-	LayerLabels  = "LABELS"
+	LayerProfile = drawing.LayerProfile
+	LayerCutouts = drawing.LayerCutouts
+	LayerPockets = drawing.LayerPockets
+	LayerHoles   = drawing.LayerHoles
+	LayerGrooves = drawing.LayerGrooves
+	LayerLabels  = drawing.LayerLabels
 )
 
 // PartDrawing returns the part at true size in the part frame: the profile, cut-outs and

@@ -74,9 +74,13 @@ func (k *classifier) outlines() ([]outline, []pantograph.Feature, error) {
 	firstOpenLine := 0
 	for _, name := range names {
 		items := by[name]
-		rule := k.opts.Layers[name]
+		rule := k.opts.rule(name)
 		if rule.Ignore {
-			k.rep.Made = append(k.rep.Made, fmt.Sprintf("layer %q: %d segment(s) left out, as asked", name, len(items)))
+			why := "as asked"
+			if _, asked := k.opts.Layers[name]; !asked {
+				why = "the layer of panto's labels"
+			}
+			k.rep.Made = append(k.rep.Made, fmt.Sprintf("layer %q: %d segment(s) left out, %s", name, len(items), why))
 			continue
 		}
 		segs := make([]geom.Segment, len(items))

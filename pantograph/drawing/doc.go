@@ -8,7 +8,10 @@
 // treating ends within Options.JoinTol as one point. Classify finally decides what each closed
 // chain is: the largest closed outline is the profile, closed outlines inside it are cut-outs,
 // circles no larger than Options.HoleMax are drilled holes (grouped by diameter), and
-// Options.Layers maps whole layers to a kind and a depth. The Report says what became what and
+// Options.Layers maps whole layers to a kind and a depth. The layer names panto's own part
+// drawings use (LayerProfile and the rest) are rules of their own unless Options.Layers
+// names them too, so a part drawing panto wrote reads back as written, except that pockets
+// come back without a depth and slots as cut-outs. The Report says what became what and
 // what was left out; nothing is dropped without a line in it.
 //
 // Chains that do not close are an error, listing where each loose end is and how far it is
