@@ -13,8 +13,24 @@ import (
 // round the profile from outside it leaves the closing: grow by r, shrink back. Whatever
 // differs between the drawn region and that is material the cutter leaves: at inside corners
 // sharper than the cutter, in necks narrower than it, or all of it when nothing is left after
-// shrinking. The same holds on the template for the stylus, since shrinking R·opening by δ and
-// then by r_s is shrinking it by R·r_c: where the cutter cannot go, neither can the stylus.
+// shrinking.
+//
+// The stylus on the template needs no check of its own, with one exception. The template
+// opening is O' = R·O offset by −δ, δ = R·r_c − r_s, and the stylus can stand in it wherever
+// O' shrunk by r_s is not empty. For δ ≥ 0 (matched or undersize stylus) two shrinkings add
+// up: O' shrunk by r_s is R·O shrunk by R·r_c, R times where the cutter's centre can go. For
+// δ < 0 (oversize) O' is R·O grown by |δ|, and growing by |δ| then shrinking by r_s > |δ|
+// keeps at least R·O shrunk by r_s − |δ| = R·r_c: the stylus goes wherever the cutter does.
+// (The reverse need not hold: growing by |δ| fills in material standing into the opening
+// that is narrower than 2|δ|/R at the part, so the template loses it and the cutter cuts it
+// away; the profile, shrunk by |δ|, likewise loses tabs that narrow. No check here sees that
+// yet.) As the stylus fits wherever the cutter does, the planner's "stylus cannot enter"
+// check (template.go) never fires for a round stylus: the cutter check passes an opening only
+// when it is wider than d − 2·fitTol, and then O' is not empty as long as r_s > R·fitTol (a
+// nanometre at 10:1). Milled holes are wider than the cutter by sizeTol; δ is never clamped.
+// The exception is a pointed stylus (r_s = 0, δ = R·r_c): O' is then R times the room of the
+// cutter's centre itself, which for an opening exactly as wide as the cutter is a line or a
+// point with no area, so the cutter check passes it and the template check loses it.
 
 // deviationTol is the material, in mm at the part, below which a feature counts as made as
 // drawn: a tenth of a micrometre, ten times finer than a micrometer reads (0.001 mm), and far
