@@ -107,8 +107,64 @@ func (pl planner) traced(pf PlannedFeature, rs []geom.Region, inside bool) (Plan
 	if len(pf.TemplateRegions) == 0 {
 		pf.Status = StatusLost
 		ws = append(ws, warnf(pf, "the stylus Ø%s cannot enter the template opening at all", num(pf.Stylus)))
+		return pf, ws
+	}
+	if w, ok := pl.oversizeLoss(pf, rs, inside); ok {
+		pf.Status = StatusDeviates
+		ws = append(ws, w)
 	}
 	return pf, ws
+}
+
+// oversizeLoss checks what a stylus larger than the matched one loses. Its template edge lies
+// |δ| inside the drawn edge (times R), and the stylus centre runs r_s out from the template:
+// every path it can follow is the template grown by r_s, whose outward corners are arcs of at
+// least r_s. So each sharp corner of the material comes out rounded to |δ|/R at the part, and
+// a detail narrower than 2|δ|/R (a thin tab of the profile, a thin web reaching into an
+// opening) is missing from the template altogether: the stylus rides past and the cutter takes
+// it away. The stylus path the template gives is compared with the cutter path scaled by R;
+// any difference in area is reported, with the corner radius |δ|/R as the amount.
+func (pl planner) oversizeLoss(pf PlannedFeature, rs []geom.Region, inside bool) (PlanWarning, bool) {
+	if pf.Compensation >= -sizeTol {
+		return PlanWarning{}, false
+	}
+	side := 1.0 // the stylus runs outside a profile
+	if inside {
+		side = -1
+	}
+	rc, rs2 := pf.Cutter/2, pf.Stylus/2
+	if pf.Tip == TipPointed {
+		rs2 = 0
+	}
+	var want, got float64
+	for _, r := range rs {
+		want += regionsArea(r.Transform(pl.t).Offset(side * pl.setup.Ratio * rc).Regions)
+	}
+	for _, tr := range pf.TemplateRegions {
+		got += regionsArea(tr.Offset(side * rs2).Regions)
+	}
+	r2 := pl.setup.Ratio * pl.setup.Ratio
+	lost := math.Abs(want-got) / r2 // mm² at the part
+	if lost <= oversizeAreaTol*math.Max(1, want/r2) {
+		return PlanWarning{}, false
+	}
+	radius := -pf.Compensation / pl.setup.Ratio
+	return amountWarn(pf, radius, "the stylus Ø%s is larger than the matched Ø%s, so sharp corners of the material come out rounded to R%s at the part and details narrower than %s are cut away (%s mm² of the part differ); use a stylus nearer Ø%s",
+		num(pf.Stylus), num(pf.Matched), num(radius), mm(2*radius), num(lost), num(pf.Matched)), true
+}
+
+// oversizeAreaTol is the area, in mm² at the part per mm² of feature, below which the stylus
+// path and the cutter path count as the same: the offsets are exact, so only rounding differs,
+// some twelve orders of magnitude below this.
+const oversizeAreaTol = 1e-7
+
+// regionsArea is the total area of rs.
+func regionsArea(rs []geom.Region) float64 {
+	var a float64
+	for _, r := range rs {
+		a += r.Area()
+	}
+	return a
 }
 
 // holes plans a holes feature: seats for a drill, or traced openings when the holes are milled.
