@@ -1,6 +1,7 @@
 package pantograph
 
 import (
+	"fmt"
 	"math"
 	"strings"
 	"testing"
@@ -97,6 +98,9 @@ func TestPointedStylusOnAnOpeningAsWideAsTheCutter(t *testing.T) {
 			}
 			if got := pf.Status == StatusLost; got != tc.lost {
 				t.Errorf("lost: got %v, want %v (warnings %v)", got, tc.lost, p.Warnings)
+			}
+			if tc.lost && !strings.Contains(fmt.Sprint(p.Warnings), "has no width") {
+				t.Errorf("warnings %v: want the pointed stylus's reason", p.Warnings)
 			}
 			// relative 1e-6: the arcs of the offset are exact, the area sums a few products.
 			if math.Abs(pf.TemplateArea-tc.area) > 1e-6*math.Max(tc.area, 1) {

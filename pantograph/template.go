@@ -106,7 +106,13 @@ func (pl planner) traced(pf PlannedFeature, rs []geom.Region, inside bool) (Plan
 	}
 	if len(pf.TemplateRegions) == 0 {
 		pf.Status = StatusLost
-		ws = append(ws, warnf(pf, "the stylus Ø%s cannot enter the template opening at all", num(pf.Stylus)))
+		if pf.Tip == TipPointed {
+			// A pointed stylus traces the cutter's centre path itself; an opening exactly as
+			// wide as the cutter leaves a path of no width, which no template can hold.
+			ws = append(ws, warnf(pf, "with a pointed stylus the template opening is the cutter's centre path, and here it has no width: no template can hold it; use a round stylus"))
+		} else {
+			ws = append(ws, warnf(pf, "the stylus Ø%s cannot enter the template opening at all", num(pf.Stylus)))
+		}
 		return pf, ws
 	}
 	if w, ok := pl.oversizeLoss(pf, rs, inside); ok {
