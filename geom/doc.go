@@ -39,7 +39,10 @@
 // the error at the part below a micrometre for any reduction ratio of 1 or more. Offsets treat
 // segments shorter than pointTol as absent, arcs whose radius shrinks to pointTol or below as
 // vanished, and pieces of the result shorter than pointTol are dropped and their neighbours
-// joined.
+// joined. Where offsets and booleans cut contours at their crossings, crossing points computed
+// from different pairs of segments are merged within snapTol (1e-7 mm), since crossings of
+// nearly tangent curves lose about half the float64 digits; pieces then share end points
+// exactly. A piece of an offset is kept when it lies at least |d| − 1e-9 mm from the input.
 //
 // # Meshes
 //
