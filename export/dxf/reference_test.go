@@ -3,6 +3,8 @@
 package dxf
 
 import (
+	"panto/internal/reftool"
+
 	"encoding/json"
 	"math"
 	"os"
@@ -73,7 +75,7 @@ func auditWithEzdxf(t *testing.T, d Drawing) ezdxfReport {
 		}
 	}
 	if py == "" {
-		t.Skip("python3 with ezdxf (Debian package python3-ezdxf) is not installed")
+		reftool.Missing(t, "python3 with ezdxf (Debian package python3-ezdxf) is not installed")
 	}
 	path := filepath.Join(t.TempDir(), "panto.dxf")
 	f, err := os.Create(path)

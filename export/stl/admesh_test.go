@@ -3,6 +3,8 @@
 package stl
 
 import (
+	"panto/internal/reftool"
+
 	"bytes"
 	"fmt"
 	"os"
@@ -21,7 +23,7 @@ import (
 // repair nothing, and measure the volume we do.
 func TestAdmeshSamples(t *testing.T) {
 	if _, err := exec.LookPath("admesh"); err != nil {
-		t.Skip("admesh is not installed (apt-get install admesh)")
+		reftool.Missing(t, "admesh is not installed (apt-get install admesh)")
 	}
 	samples, err := filepath.Glob(filepath.Join("..", "..", "samples", "*.toml"))
 	if err != nil || len(samples) == 0 {

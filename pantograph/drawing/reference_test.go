@@ -3,6 +3,8 @@
 package drawing
 
 import (
+	"panto/internal/reftool"
+
 	"math"
 	"os"
 	"os/exec"
@@ -20,7 +22,7 @@ func ezdxfPython(t *testing.T) string {
 			return py
 		}
 	}
-	t.Skip("python3 with ezdxf (Debian package python3-ezdxf) is not installed")
+	reftool.Missing(t, "python3 with ezdxf (Debian package python3-ezdxf) is not installed")
 	return ""
 }
 
