@@ -3,8 +3,6 @@
 package dxf
 
 import (
-	"panto/internal/reftool"
-
 	"encoding/json"
 	"math"
 	"os"
@@ -13,6 +11,7 @@ import (
 	"testing"
 
 	"panto/geom"
+	"panto/internal/reftool"
 	"panto/pantograph"
 )
 

@@ -3,8 +3,6 @@
 package stl
 
 import (
-	"panto/internal/reftool"
-
 	"bytes"
 	"fmt"
 	"os"
@@ -14,6 +12,7 @@ import (
 	"strconv"
 	"testing"
 
+	"panto/internal/reftool"
 	"panto/pantograph"
 	"panto/pantograph/partfile"
 )

@@ -3,14 +3,13 @@
 package drawing
 
 import (
-	"panto/internal/reftool"
-
 	"math"
 	"os"
 	"os/exec"
 	"path/filepath"
 	"testing"
 
+	"panto/internal/reftool"
 	"panto/pantograph"
 )
 
