@@ -10,6 +10,7 @@ import (
 	"github.com/tdewolff/canvas/renderers/pdf"
 	"github.com/tdewolff/canvas/renderers/svg"
 
+	"panto/export/internal/pdffont"
 	"panto/geom"
 	"panto/pantograph"
 )
@@ -167,7 +168,11 @@ func writePDF(w io.Writer, pic picture, fonts *Fonts, paper Paper, compress bool
 	if err := r.Close(); err != nil {
 		return fmt.Errorf("drawing: %w", err)
 	}
-	return WriteFixed(w, buf.Bytes())
+	b, err := pdffont.Fix(buf.Bytes()) // the embedded fonts carry the clock otherwise
+	if err != nil {
+		return fmt.Errorf("drawing: %w", err)
+	}
+	return WriteFixed(w, b)
 }
 
 // frame blanks the margins of a tiled page and labels it.

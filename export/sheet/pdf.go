@@ -10,6 +10,7 @@ import (
 	"github.com/tdewolff/canvas/renderers/pdf"
 
 	"panto/export/drawing"
+	"panto/export/internal/pdffont"
 	"panto/geom"
 	"panto/pantograph"
 )
@@ -46,7 +47,11 @@ func EncodePDF(w io.Writer, s pantograph.Sheet, paper drawing.Paper) error {
 	if err := r.Close(); err != nil {
 		return fmt.Errorf("sheet: %w", err)
 	}
-	return drawing.WriteFixed(w, buf.Bytes())
+	b, err := pdffont.Fix(buf.Bytes()) // the embedded fonts carry the clock otherwise
+	if err != nil {
+		return fmt.Errorf("sheet: %w", err)
+	}
+	return drawing.WriteFixed(w, b)
 }
 
 // flow sets lines down the page and starts a new page when one is full. A dry flow only counts
