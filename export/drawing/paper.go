@@ -39,11 +39,32 @@ const Margin = 12
 // marks and for trimming one sheet to lay it over the next (common practice, no source).
 const Overlap = 15
 
+// creationDate matches a PDF date with its optional time zone: D:YYYYMMDDHHmmSS then Z, or
+// +HH'mm' / -HH'mm' (ISO 32000-1 §7.9.4).
+var creationDate = regexp.MustCompile(`/CreationDate ?\(D:[0-9]{14}(Z|[+-][0-9]{2}'[0-9]{2}'?)?`)
+
 // WriteFixed writes a finished PDF with its clock-stamped creation date replaced by a fixed
-// one of the same length, so the same drawing gives the same bytes and no offset moves.
+// one of the same length (1 January 2000, in UTC), so the same drawing gives the same bytes on
+// any machine, whatever its clock and time zone, and no offset moves.
 func WriteFixed(w io.Writer, b []byte) error {
-	creationDate := regexp.MustCompile(`(/CreationDate ?\(D:)[0-9]{14}`)
-	b = creationDate.ReplaceAll(b, []byte("${1}20000101000000"))
+	b = creationDate.ReplaceAllFunc(b, fixedDate)
 	_, err := io.Copy(w, bytes.NewReader(b))
 	return err
+}
+
+// fixedDate returns m with its date and time set to 2000-01-01 00:00:00 and any zone offset set
+// to +00'00', keeping every character's place.
+func fixedDate(m []byte) []byte {
+	out := append([]byte(nil), m...)
+	i := bytes.Index(out, []byte("D:")) + 2
+	copy(out[i:], "20000101000000")
+	for k := i + 14; k < len(out); k++ {
+		switch {
+		case out[k] == '-':
+			out[k] = '+'
+		case out[k] >= '0' && out[k] <= '9':
+			out[k] = '0'
+		}
+	}
+	return out
 }

@@ -90,11 +90,7 @@ func (l partLayout) draw(pen Pen, off geom.Vec) {
 	pen.Text(off.X, top-6, 14, true, "Part: "+l.part.Name, canvas.Left)
 	pen.Text(off.X, top-12, 8.5, false, fmt.Sprintf("Scale %s:1 (the drawing is %s times the part). Dimensions in %s, measured from the datum.",
 		trim(l.scale), trim(l.scale), l.unitWord()), canvas.Left)
-	stock := l.part.Stock.Material
-	if l.part.Stock.Thickness > 0 {
-		stock += ", " + l.depth(pantograph.Depth{MM: l.part.Stock.Thickness}) + " thick"
-	}
-	pen.Text(off.X, top-17, 8.5, false, "Stock: "+stock+". Numbers # match the dial-reading sheet and the template.", canvas.Left)
+	pen.Text(off.X, top-17, 8.5, false, l.stockWords()+"Numbers # match the dial-reading sheet and the template.", canvas.Left)
 	for _, c := range l.part.Profile.Region.Contours() {
 		pen.Contour(c, t, 0.35)
 	}
@@ -248,4 +244,19 @@ func (l partLayout) depth(d pantograph.Depth) string {
 		return d.String()
 	}
 	return l.length(d.MM) + " " + map[bool]string{true: "in", false: "mm"}[l.part.Units == pantograph.Inch]
+}
+
+// stockWords names the stock for the page's heading, or nothing when the part does not say.
+func (l partLayout) stockWords() string {
+	var w []string
+	if m := l.part.Stock.Material; m != "" {
+		w = append(w, m)
+	}
+	if th := l.part.Stock.Thickness; th > 0 {
+		w = append(w, l.depth(pantograph.Depth{MM: th})+" thick")
+	}
+	if len(w) == 0 {
+		return ""
+	}
+	return "Stock: " + strings.Join(w, ", ") + ". "
 }

@@ -137,8 +137,8 @@ func TestPDFPage(t *testing.T) {
 		{drawing.Letter(), 612, 792},
 	} {
 		t.Run(tc.paper.Name, func(t *testing.T) {
-			// Two runs are not compared byte for byte: the font library stamps the embedded font
-			// subset's "modified" field from the clock, inside a compressed stream.
+			// Page sizes: ISO 216 A4 210 × 297 mm and ANSI Letter 8.5 × 11 in, in points
+			// (ISO 32000-1 §8.3.2.3: 1/72 in). Byte-for-byte repeatability is TestPDFDeterministic's.
 			var a bytes.Buffer
 			if err := EncodePDF(&a, s, tc.paper); err != nil {
 				t.Fatal(err)
