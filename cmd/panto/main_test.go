@@ -74,19 +74,7 @@ func TestCheckGolden(t *testing.T) {
 			if code != exitOK {
 				t.Fatalf("exit code %d: %s", code, errOut)
 			}
-			golden := filepath.Join("../../testdata/golden", name+".txt")
-			if *update {
-				if err := os.WriteFile(golden, []byte(out), 0o644); err != nil {
-					t.Fatal(err)
-				}
-			}
-			want, err := os.ReadFile(golden)
-			if err != nil {
-				t.Fatalf("%v (run with -update to create it)", err)
-			}
-			if out != string(want) {
-				t.Errorf("got:\n%s\nwant:\n%s", out, want)
-			}
+			checkGolden(t, filepath.Join("../../testdata/golden", name+".txt"), out)
 		})
 	}
 }
@@ -159,5 +147,22 @@ func TestCheckJSONProblems(t *testing.T) {
 	// derived: the hole at x = 25 with radius 0.5 is 4.5 beyond the edge at x = 20
 	if p.Severity != "error" || p.Feature != `[[holes]] "pivots"` || p.Line != 17 || p.Amount == nil || *p.Amount != 4.5 {
 		t.Errorf("got %+v", p)
+	}
+}
+
+// checkGolden compares out with the golden file at path, rewriting it first under -update.
+func checkGolden(t *testing.T, path, out string) {
+	t.Helper()
+	if *update {
+		if err := os.WriteFile(path, []byte(out), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("%v (run with -update to create it)", err)
+	}
+	if out != string(want) {
+		t.Errorf("got:\n%s\nwant:\n%s", out, want)
 	}
 }

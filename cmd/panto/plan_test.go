@@ -3,7 +3,6 @@ package main
 import (
 	"encoding/json"
 	"math"
-	"os"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -81,19 +80,7 @@ func TestPlanGolden(t *testing.T) {
 	if code != exitOK {
 		t.Fatalf("exit code %d: %s", code, errOut)
 	}
-	golden := "../../testdata/plans/pump-port-plate.txt"
-	if *update {
-		if err := os.WriteFile(golden, []byte(out), 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
-	want, err := os.ReadFile(golden)
-	if err != nil {
-		t.Fatalf("%v (run with -update to create it)", err)
-	}
-	if out != string(want) {
-		t.Errorf("got:\n%s\nwant:\n%s", out, want)
-	}
+	checkGolden(t, "../../testdata/plans/pump-port-plate.txt", out)
 }
 
 func TestPlanJSON(t *testing.T) {
