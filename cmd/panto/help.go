@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"io"
 
-	"panto/pantograph/drawing"
+	"panto/pantograph/cad"
 )
 
 const usage = `panto prepares parts for a manual pantograph mill.
@@ -112,7 +112,7 @@ func runHelp(args []string, stdout, stderr io.Writer) int {
 	case args[0] == "stylus":
 		fmt.Fprint(stdout, stylusUsage)
 	case args[0] == "import":
-		fmt.Fprintf(stdout, importUsage, drawing.DefaultHoleMaxMM)
+		fmt.Fprintf(stdout, importUsage, cad.DefaultHoleMaxMM)
 	case args[0] == "sheet":
 		fmt.Fprint(stdout, sheetUsage)
 	case args[0] == "make":

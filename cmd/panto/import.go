@@ -12,7 +12,7 @@ import (
 
 	"panto/export/parttoml"
 	"panto/pantograph"
-	"panto/pantograph/drawing"
+	"panto/pantograph/cad"
 	"panto/pantograph/partfile"
 )
 
@@ -53,7 +53,7 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 
 // options turns the flags into drawing options. The stock's thickness is in the drawing's
 // units here, as it is written into the part file.
-func (o importFlags) options() (drawing.Options, error) {
+func (o importFlags) options() (cad.Options, error) {
 	opts, err := o.drawing.options()
 	if err != nil {
 		return opts, err
@@ -63,8 +63,8 @@ func (o importFlags) options() (drawing.Options, error) {
 }
 
 // importDrawing reads the drawing, prints the report and writes the part file.
-func importDrawing(path string, o importFlags, opts drawing.Options, stdout, stderr io.Writer) int {
-	if !drawing.IsDrawing(path) {
+func importDrawing(path string, o importFlags, opts cad.Options, stdout, stderr io.Writer) int {
+	if !cad.IsDrawing(path) {
 		fmt.Fprintf(stderr, "panto import: %s: give a .dxf or .svg drawing\n", path)
 		return exitUsage
 	}
@@ -76,7 +76,7 @@ func importDrawing(path string, o importFlags, opts drawing.Options, stdout, std
 		fmt.Fprintf(stderr, "panto import: %s already exists; give --force to overwrite it, or -o another name\n", out)
 		return exitUsage
 	}
-	part, rep, err := drawing.ReadFile(path, opts)
+	part, rep, err := cad.ReadFile(path, opts)
 	if err != nil {
 		return reportFileError("import", "drawing", err, stderr)
 	}
@@ -101,7 +101,7 @@ func importDrawing(path string, o importFlags, opts drawing.Options, stdout, std
 }
 
 // importHeader is the comment at the top of an imported part file.
-func importHeader(path string, rep drawing.Report) []string {
+func importHeader(path string, rep cad.Report) []string {
 	h := []string{"Part file made by panto import from " + filepath.Base(path) + ".",
 		"Units: " + rep.UnitsNote + ".",
 		"Check names, depths and the stock before use; 'panto check' reads this file."}
@@ -133,11 +133,11 @@ func writeFileAtomic(path string, data []byte) error {
 
 // readPartOrDrawing reads a part file, or a DXF or SVG drawing with opts (its report going to
 // stderr), so that commands taking a part accept a drawing too.
-func readPartOrDrawing(path string, opts drawing.Options, stderr io.Writer) (pantograph.Part, error) {
-	if !drawing.IsDrawing(path) {
+func readPartOrDrawing(path string, opts cad.Options, stderr io.Writer) (pantograph.Part, error) {
+	if !cad.IsDrawing(path) {
 		return partfile.ReadFile(path)
 	}
-	part, rep, err := drawing.ReadFile(path, opts)
+	part, rep, err := cad.ReadFile(path, opts)
 	if err == nil {
 		rep.WriteTo(stderr)
 	}

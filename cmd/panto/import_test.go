@@ -8,7 +8,7 @@ import (
 	"testing"
 
 	"panto/pantograph"
-	"panto/pantograph/drawing"
+	"panto/pantograph/cad"
 	"panto/pantograph/partfile"
 )
 
@@ -139,7 +139,7 @@ func TestImportWritesPartFile(t *testing.T) {
 // TestMakeDXFFiles plans a drawing and checks that both DXF files read back: the template's
 // outline is the part's profile at the ratio, the part's at true size.
 func TestMakeDXFFiles(t *testing.T) {
-	part, _, err := drawing.ReadFile(drawings+"pump-port-plate.svg", drawing.Options{Thickness: 0.8})
+	part, _, err := cad.ReadFile(drawings+"pump-port-plate.svg", cad.Options{Thickness: 0.8})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -156,7 +156,7 @@ func TestMakeDXFFiles(t *testing.T) {
 	}
 	ratio := map[string]float64{"template.dxf": 10, "part.dxf": 1}
 	for _, f := range files {
-		got, _, err := drawing.Read(f.name, f.data, drawing.Options{HoleMax: -1})
+		got, _, err := cad.Read(f.name, f.data, cad.Options{HoleMax: -1})
 		if err != nil {
 			t.Fatalf("%s: %v", f.name, err)
 		}

@@ -10,7 +10,7 @@ import (
 
 	"panto/geom"
 	"panto/pantograph"
-	"panto/pantograph/drawing"
+	"panto/pantograph/cad"
 	"panto/pantograph/partfile"
 )
 
@@ -45,8 +45,8 @@ func addDrawingFlags(fl *pflag.FlagSet, d *drawingFlags) {
 }
 
 // options checks the flags and turns them into drawing options, without the stock.
-func (d drawingFlags) options() (drawing.Options, error) {
-	opts := drawing.Options{HoleMax: d.holeMax, JoinTol: d.join, Layers: map[string]drawing.LayerRule{}}
+func (d drawingFlags) options() (cad.Options, error) {
+	opts := cad.Options{HoleMax: d.holeMax, JoinTol: d.join, Layers: map[string]cad.LayerRule{}}
 	switch pantograph.Units(d.units) {
 	case "", pantograph.MM, pantograph.Inch:
 		opts.Units = pantograph.Units(d.units)
@@ -60,7 +60,7 @@ func (d drawingFlags) options() (drawing.Options, error) {
 		return opts, fmt.Errorf("--hole-max must be 0 or more, got %g", d.holeMax)
 	}
 	for _, l := range d.layers {
-		name, rule, err := drawing.ParseLayerRule(l)
+		name, rule, err := cad.ParseLayerRule(l)
 		if err != nil {
 			return opts, fmt.Errorf("--layer %v", err)
 		}
@@ -165,7 +165,7 @@ func readAndPlan(cmd, path string, o planFlags, setup pantograph.Setup, stderr i
 // readPart reads a part file, or a drawing with the drawing flags (its report going to
 // stderr), and puts in the stock given by --thickness and --material.
 func readPart(cmd, path string, o planFlags, stderr io.Writer) (pantograph.Part, int, bool) {
-	isDrawing := drawing.IsDrawing(path)
+	isDrawing := cad.IsDrawing(path)
 	if !isDrawing && len(o.drawingGiven) > 0 {
 		fmt.Fprintf(stderr, "panto %s: %s is for reading a drawing; %s is a part file\n", cmd, o.drawingGiven[0], path)
 		return pantograph.Part{}, exitUsage, false

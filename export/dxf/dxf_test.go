@@ -8,14 +8,14 @@ import (
 
 	"panto/geom"
 	"panto/pantograph"
-	"panto/pantograph/drawing"
+	"panto/pantograph/cad"
 	"panto/pantograph/partfile"
 )
 
 // readBack reads a written drawing with panto's own DXF reader.
-func readBack(t *testing.T, b []byte) *drawing.Sheet {
+func readBack(t *testing.T, b []byte) *cad.Sheet {
 	t.Helper()
-	sh, err := drawing.ReadDXF("out.dxf", b, drawing.Options{})
+	sh, err := cad.ReadDXF("out.dxf", b, cad.Options{})
 	if err != nil {
 		t.Fatalf("reading back: %v", err)
 	}
@@ -86,7 +86,7 @@ func TestPartDrawingReadsBack(t *testing.T) {
 	if !bytes.Equal(b.Bytes(), again.Bytes()) {
 		t.Errorf("two writes of the same drawing differ")
 	}
-	got, rep, err := drawing.Read("bridge.dxf", b.Bytes(), drawing.Options{Layers: map[string]drawing.LayerRule{
+	got, rep, err := cad.Read("bridge.dxf", b.Bytes(), cad.Options{Layers: map[string]cad.LayerRule{
 		LayerPockets: {Kind: pantograph.KindPocket, Depth: 0.3}, LayerHoles: {Kind: pantograph.KindHoles}}})
 	if err != nil {
 		t.Fatal(err)

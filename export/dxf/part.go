@@ -6,19 +6,19 @@ import (
 
 	"panto/geom"
 	"panto/pantograph"
-	"panto/pantograph/drawing"
+	"panto/pantograph/cad"
 )
 
 // The layers of a part drawing, one per kind of feature so that a CAD program can show, hide
-// or colour them apart. The names live in package drawing, which reads them back as default
+// or colour them apart. The names live in package cad, which reads them back as default
 // layer rules, so that panto imports its own part drawings as written.
 const (
-	LayerProfile = drawing.LayerProfile
-	LayerCutouts = drawing.LayerCutouts
-	LayerPockets = drawing.LayerPockets
-	LayerHoles   = drawing.LayerHoles
-	LayerGrooves = drawing.LayerGrooves
-	LayerLabels  = drawing.LayerLabels
+	LayerProfile = cad.LayerProfile
+	LayerCutouts = cad.LayerCutouts
+	LayerPockets = cad.LayerPockets
+	LayerHoles   = cad.LayerHoles
+	LayerGrooves = cad.LayerGrooves
+	LayerLabels  = cad.LayerLabels
 )
 
 // PartDrawing returns the part at true size in the part frame: the profile, cut-outs and

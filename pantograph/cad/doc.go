@@ -1,4 +1,4 @@
-// Package drawing reads CAD drawings — DXF and SVG files — and makes a pantograph.Part of them,
+// Package cad reads CAD drawings — DXF and SVG files — and makes a pantograph.Part of them,
 // so that a machinist can start from the drawing they already have.
 //
 // Reading is in three steps. A reader (ReadDXF, ReadSVG) turns the file into loose segments in
@@ -22,4 +22,4 @@
 // line) and what is wrong. The readers bound their work: counts in a file are never trusted
 // for allocation, curves are cut into at most maxCurvePieces chords, and block insertion stops
 // at maxSegments segments and maxBlockDepth levels.
-package drawing
+package cad

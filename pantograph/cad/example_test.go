@@ -1,10 +1,10 @@
-package drawing_test
+package cad_test
 
 import (
 	"fmt"
 	"os"
 
-	"panto/pantograph/drawing"
+	"panto/pantograph/cad"
 )
 
 // A drawing in millimetres: a 20 × 10 plate with a window and two fixing holes.
@@ -15,7 +15,7 @@ func ExampleRead() {
   <circle cx="3" cy="5" r="0.6"/>
   <circle cx="17" cy="5" r="0.6"/>
 </svg>`
-	part, rep, err := drawing.Read("plate.svg", []byte(svg), drawing.Options{})
+	part, rep, err := cad.Read("plate.svg", []byte(svg), cad.Options{})
 	if err != nil {
 		fmt.Println(err)
 		return

@@ -1,6 +1,6 @@
 //go:build reference
 
-package drawing
+package cad
 
 import (
 	"math"

@@ -1,4 +1,4 @@
-package drawing
+package cad
 
 import (
 	"errors"
@@ -26,7 +26,7 @@ func checkFuzzResult(t *testing.T, name string, err error) {
 	}
 	var de *Error
 	if !errors.As(err, &de) {
-		t.Fatalf("got %T %v, want a *drawing.Error", err, err)
+		t.Fatalf("got %T %v, want a *cad.Error", err, err)
 	}
 	if !strings.HasPrefix(de.Error(), name) || de.Msg == "" {
 		t.Fatalf("error %q does not name the file or says nothing", de.Error())

@@ -1,4 +1,4 @@
-package drawing_test
+package cad_test
 
 import (
 	"bytes"
@@ -11,7 +11,7 @@ import (
 	"panto/export/dxf"
 	"panto/geom"
 	"panto/pantograph"
-	"panto/pantograph/drawing"
+	"panto/pantograph/cad"
 	"panto/pantograph/partfile"
 )
 
@@ -40,7 +40,7 @@ func TestOwnPartDrawingReadsBack(t *testing.T) {
 			if err := dxf.Encode(&buf, dxf.PartDrawing(want)); err != nil {
 				t.Fatal(err)
 			}
-			got, rep, err := drawing.Read("part.dxf", buf.Bytes(), drawing.Options{})
+			got, rep, err := cad.Read("part.dxf", buf.Bytes(), cad.Options{})
 			if err != nil {
 				t.Fatalf("got error %v, want the part back", err)
 			}
@@ -170,20 +170,20 @@ func TestOwnLayerRules(t *testing.T) {
 	}
 	tests := []struct {
 		name   string
-		layers map[string]drawing.LayerRule
+		layers map[string]cad.LayerRule
 		want   map[pantograph.Kind]int
 		depth  float64 // of the pocket, mm; 0 for none given
 	}{
 		// derived: one feature per layer, as drawn
 		{"defaults", nil, map[pantograph.Kind]int{pantograph.KindPocket: 1, pantograph.KindHoles: 1, pantograph.KindGroove: 1}, 0},
-		{"pocket depth from a rule", map[string]drawing.LayerRule{"POCKETS": {Kind: pantograph.KindPocket, Depth: 0.3}},
+		{"pocket depth from a rule", map[string]cad.LayerRule{"POCKETS": {Kind: pantograph.KindPocket, Depth: 0.3}},
 			map[pantograph.Kind]int{pantograph.KindPocket: 1, pantograph.KindHoles: 1, pantograph.KindGroove: 1}, 0.3},
-		{"rules override", map[string]drawing.LayerRule{"POCKETS": {Kind: pantograph.KindCutout}, "GROOVES": {Ignore: true}},
+		{"rules override", map[string]cad.LayerRule{"POCKETS": {Kind: pantograph.KindCutout}, "GROOVES": {Ignore: true}},
 			map[pantograph.Kind]int{pantograph.KindCutout: 1, pantograph.KindHoles: 1}, 0},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			p, _, err := drawing.Read("part.dxf", buf.Bytes(), drawing.Options{Layers: tc.layers})
+			p, _, err := cad.Read("part.dxf", buf.Bytes(), cad.Options{Layers: tc.layers})
 			if err != nil {
 				t.Fatalf("got error %v", err)
 			}
