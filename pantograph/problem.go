@@ -1,6 +1,10 @@
 package pantograph
 
-import "fmt"
+import (
+	"fmt"
+
+	"panto/internal/numfmt"
+)
 
 // Severity says whether a problem makes a part unfit to cut.
 type Severity string
@@ -69,25 +73,8 @@ func mm(v float64) string {
 	return fmt.Sprintf("%s mm", num(v))
 }
 
-// num formats a number for messages to three decimals, trailing zeros dropped.
-func num(v float64) string {
-	s := fmt.Sprintf("%.3f", v)
-	for len(s) > 1 && s[len(s)-1] == '0' {
-		s = s[:len(s)-1]
-	}
-	s = trimDot(s)
-	if s == "-0" {
-		return "0"
-	}
-	return s
-}
-
-func trimDot(s string) string {
-	if len(s) > 0 && s[len(s)-1] == '.' {
-		return s[:len(s)-1]
-	}
-	return s
-}
+// num formats a length for messages, as numfmt.MM does.
+func num(v float64) string { return numfmt.MM(v) }
 
 // pt formats a point for messages.
-func pt(x, y float64) string { return "(" + num(x) + ", " + num(y) + ")" }
+func pt(x, y float64) string { return numfmt.Point(x, y) }

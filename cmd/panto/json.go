@@ -5,6 +5,7 @@ import (
 	"io"
 	"math"
 
+	"panto/internal/numfmt"
 	"panto/pantograph"
 )
 
@@ -50,11 +51,8 @@ type problemJSON struct {
 	Amount   *float64 `json:"amount,omitempty"`
 }
 
-// jsonDigits is how many decimals of a millimetre the JSON keeps: a nanometre, far below what
-// any pantograph cuts, and enough to hide float noise such as 13.999999999999998.
-const jsonDigits = 1e6
-
-func round(v float64) float64 { return math.Round(v*jsonDigits) / jsonDigits }
+// round rounds a length for JSON (numfmt.JSON: to a nanometre).
+func round(v float64) float64 { return numfmt.JSON(v) }
 
 func roundPtr(v float64) *float64 { r := round(v); return &r }
 

@@ -11,6 +11,7 @@ import (
 
 	"github.com/spf13/pflag"
 
+	"panto/internal/numfmt"
 	"panto/pantograph"
 	"panto/pantograph/partfile"
 )
@@ -190,17 +191,9 @@ func machineName(m pantograph.Machine) string {
 // 4 for inches (a ten-thousandth), as the help says.
 func (r *stylusReport) length(mm float64) string {
 	if r.units == pantograph.Inch {
-		return fmt.Sprintf("%.4f in", noNegZero(mm/pantograph.MMPerInch, 4))
+		return numfmt.Fixed(mm/pantograph.MMPerInch, 4) + " in"
 	}
-	return fmt.Sprintf("%.3f mm", noNegZero(mm, 3))
-}
-
-// noNegZero returns 0 for a value that would print as -0 at the given decimals.
-func noNegZero(v float64, decimals int) float64 {
-	if math.Abs(v) < 0.5*math.Pow(10, -float64(decimals)) {
-		return 0
-	}
-	return v
+	return numfmt.Fixed(mm, 3) + " mm"
 }
 
 // writeText prints the report as a few labelled lines.
@@ -297,7 +290,7 @@ func (r *stylusReport) writeJSON(w io.Writer) error {
 		if r.units == pantograph.Inch {
 			mm /= pantograph.MMPerInch
 		}
-		v := round(mm)
+		v := numfmt.JSON(mm)
 		return &v
 	}
 	out := stylusJSON{Units: string(r.units), Ratio: a.ratio, Direction: jsonDirection(r.direction)}

@@ -5,8 +5,8 @@ import (
 	"io"
 	"math"
 	"strconv"
-	"strings"
 
+	"panto/internal/numfmt"
 	"panto/pantograph"
 )
 
@@ -154,20 +154,10 @@ func plural(n int, word string) string {
 	return fmt.Sprintf("%d %ss", n, word)
 }
 
-// num formats a length in mm to the micrometre, trailing zeros dropped.
-func num(v float64) string { return trim(strconv.FormatFloat(v, 'f', 3, 64)) }
+// num formats a length in mm for people (numfmt.MM).
+func num(v float64) string { return numfmt.MM(v) }
 
-// num4 formats an inch value to a ten-thousandth.
-func num4(v float64) string { return trim(strconv.FormatFloat(v, 'f', 4, 64)) }
+// num4 formats an inch value for people (numfmt.Inch).
+func num4(v float64) string { return numfmt.Inch(v) }
 
-func trim(s string) string {
-	if strings.Contains(s, ".") {
-		s = strings.TrimRight(strings.TrimRight(s, "0"), ".")
-	}
-	if s == "-0" {
-		return "0"
-	}
-	return s
-}
-
-func point(x, y float64) string { return "(" + num(x) + ", " + num(y) + ")" }
+func point(x, y float64) string { return numfmt.Point(x, y) }

@@ -10,6 +10,7 @@ import (
 	"github.com/tdewolff/canvas"
 
 	"panto/geom"
+	"panto/internal/numfmt"
 	"panto/pantograph"
 )
 
@@ -232,8 +233,7 @@ func (l partLayout) unitWord() string {
 // length formats mm in the part's own units: inches to 0.0001, mm to 0.001.
 func (l partLayout) length(mm float64) string {
 	if l.part.Units == pantograph.Inch {
-		s := strconv.FormatFloat(mm/pantograph.MMPerInch, 'f', 4, 64)
-		return strings.TrimRight(strings.TrimRight(s, "0"), ".")
+		return numfmt.Inch(mm / pantograph.MMPerInch)
 	}
 	return trim(mm)
 }

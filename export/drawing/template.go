@@ -9,6 +9,7 @@ import (
 	"github.com/tdewolff/canvas"
 
 	"panto/geom"
+	"panto/internal/numfmt"
 	"panto/pantograph"
 )
 
@@ -153,8 +154,5 @@ func templateScaleNote(p pantograph.Plan) string {
 	return s + " Numbers # match the dial-reading sheet."
 }
 
-// trim formats v with up to three decimals.
-func trim(v float64) string {
-	s := strconv.FormatFloat(v, 'f', 3, 64)
-	return strings.TrimRight(strings.TrimRight(s, "0"), ".")
-}
+// trim formats a length in mm for people (numfmt.MM).
+func trim(v float64) string { return numfmt.MM(v) }

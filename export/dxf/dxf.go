@@ -17,6 +17,7 @@ import (
 	"strings"
 
 	"panto/geom"
+	"panto/internal/numfmt"
 )
 
 // Drawing is what to write. Every length is in millimetres.
@@ -177,11 +178,7 @@ func (e *encoder) int(code, v int) { e.pair(code, strconv.Itoa(v)) }
 
 // num writes a number rounded to a nanometre, so float noise does not reach the file.
 func (e *encoder) num(code int, v float64) {
-	v = math.Round(v*1e9) / 1e9
-	if v == 0 {
-		v = 0
-	}
-	e.pair(code, strconv.FormatFloat(v, 'f', -1, 64))
+	e.pair(code, numfmt.File(v))
 }
 
 func (e *encoder) point(code int, p geom.Vec) {

@@ -11,11 +11,10 @@ import (
 	"errors"
 	"fmt"
 	"io"
-	"math"
-	"strconv"
 	"strings"
 
 	"panto/geom"
+	"panto/internal/numfmt"
 	"panto/pantograph"
 )
 
@@ -91,11 +90,7 @@ func unitWord(u pantograph.Units) string {
 // num formats a length in the file's units, rounded to a billionth of a unit so that float
 // noise (31.000000000000004) does not reach the file.
 func (w *writer) num(mm float64) string {
-	v := math.Round(mm/w.scale*1e9) / 1e9
-	if v == 0 {
-		v = 0 // no "-0"
-	}
-	return strconv.FormatFloat(v, 'f', -1, 64)
+	return numfmt.File(mm / w.scale)
 }
 
 func (w *writer) point(p geom.Vec) string {

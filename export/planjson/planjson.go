@@ -10,9 +10,9 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
-	"math"
 
 	"panto/geom"
+	"panto/internal/numfmt"
 	"panto/pantograph"
 )
 
@@ -75,17 +75,8 @@ type warningJSON struct {
 	Stops   bool     `json:"stops,omitempty"`
 }
 
-// digits is how many decimals of a millimetre the JSON keeps: a nanometre, far below what any
-// pantograph cuts, and enough to hide float noise such as 13.999999999999998.
-const digits = 1e6
-
-func round(v float64) float64 {
-	r := math.Round(v*digits) / digits
-	if r == 0 {
-		return 0 // no "-0"
-	}
-	return r
-}
+// round rounds a length for JSON (numfmt.JSON: to a nanometre).
+func round(v float64) float64 { return numfmt.JSON(v) }
 
 func ptr(v float64) *float64 { r := round(v); return &r }
 

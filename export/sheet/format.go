@@ -10,19 +10,12 @@ import (
 	"strconv"
 	"strings"
 
+	"panto/internal/numfmt"
 	"panto/pantograph"
 )
 
-// num formats a length with at most three decimals and no trailing zeros: micrometres are as
-// fine as a bench pantograph's dials read at the part.
-func num(v float64) string {
-	s := strconv.FormatFloat(v, 'f', 3, 64)
-	s = strings.TrimRight(strings.TrimRight(s, "0"), ".")
-	if s == "-0" {
-		return "0"
-	}
-	return s
-}
+// num formats a length in mm for people (numfmt.MM).
+func num(v float64) string { return numfmt.MM(v) }
 
 // reading formats a reading with the remainder's worth at the part when there is one:
 // "6 t 17 div" or "2 t 34 div +0.50 div (0.0013 mm)".
@@ -80,10 +73,7 @@ func dialLine(d pantograph.DialInfo) string {
 
 // fine formats a small quantity to four decimals without trailing zeros (0.0001 in is a
 // common inch division).
-func fine(v float64) string {
-	s := strconv.FormatFloat(v, 'f', 4, 64)
-	return strings.TrimRight(strings.TrimRight(s, "0"), ".")
-}
+func fine(v float64) string { return numfmt.Trim(v, 4) }
 
 // stepTitle is a row's heading: "3  #2 pins: drill hole 1 of 2".
 func stepTitle(r pantograph.SheetRow) string {

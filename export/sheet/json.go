@@ -5,6 +5,7 @@ import (
 	"io"
 	"math"
 
+	"panto/internal/numfmt"
 	"panto/pantograph"
 )
 
@@ -128,8 +129,8 @@ func readingOf(r pantograph.Reading, d pantograph.DialInfo) *readingJSON {
 		AtPart: nm(r.AtPart), Text: r.String()}
 }
 
-// nm rounds to a nanometre (1e-6 mm).
-func nm(v float64) float64 { return math.Round(v*1e6) / 1e6 }
+// nm rounds a length for JSON (numfmt.JSON: to a nanometre).
+func nm(v float64) float64 { return numfmt.JSON(v) }
 
 // nonNil returns s, or an empty slice for nil so JSON shows [] rather than null.
 func nonNil(s []string) []string {
