@@ -10,7 +10,6 @@ import (
 
 	"github.com/spf13/pflag"
 
-	"panto/export/parttoml"
 	"panto/pantograph"
 	"panto/pantograph/cad"
 	"panto/pantograph/partfile"
@@ -82,7 +81,7 @@ func importDrawing(path string, o importFlags, opts cad.Options, stdout, stderr 
 	}
 	rep.WriteTo(stdout)
 	var buf bytes.Buffer
-	enc := parttoml.Encoder{Header: importHeader(path, rep)}
+	enc := partfile.Encoder{Header: importHeader(path, rep)}
 	if err := enc.Encode(&buf, part); err != nil {
 		fmt.Fprintf(stderr, "panto import: %v\n", err)
 		return exitFailed

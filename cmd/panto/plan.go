@@ -9,7 +9,6 @@ import (
 
 	"github.com/spf13/pflag"
 
-	"panto/export/planjson"
 	"panto/geom"
 	"panto/pantograph"
 )
@@ -54,7 +53,7 @@ func plan(path string, setup pantograph.Setup, o planFlags, stdout, stderr io.Wr
 	}
 	p := j.plan
 	if o.asJSON {
-		if err := planjson.Encode(stdout, p); err != nil {
+		if err := writePlanJSON(stdout, p); err != nil {
 			fmt.Fprintf(stderr, "panto plan: %v\n", err)
 			return exitFailed
 		}

@@ -1,4 +1,5 @@
-// Package partfile reads part files: TOML descriptions of a part in its own drawing units.
+// Package partfile reads and writes part files, TOML descriptions of a part in its own drawing
+// units, and reads machine files.
 //
 // A part file has a name, its units ("mm", the default, or "in"; inches are converted to
 // millimetres on reading), a datum ([x, y], default [0, 0]), a [stock] table (material,
@@ -18,6 +19,15 @@
 //
 // Mistakes are returned as *Error naming the file, line and key. Read checks the file's form
 // and sizes only; pantograph.Check judges the part (features outside the profile, overlaps).
+// Encode writes a Part back as a part file that reads to the same geometry, as 'panto import'
+// does for a drawing.
+//
+// # Machine files
+//
+// The package also reads machine files (ReadMachine, ReadMachineFile): TOML descriptions of a
+// pantograph mill with its dials, tools and printer. The two formats share the TOML reading,
+// the line index behind every message, and the unknown-key suggestions; machine.go describes
+// the machine file's keys. There is no machine-file writer.
 package partfile
 
 import (

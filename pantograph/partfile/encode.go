@@ -1,10 +1,8 @@
-// Package parttoml writes a pantograph.Part as a part file: the TOML text that
-// pantograph/partfile reads, laid out for a machinist to read and edit, with comments saying
-// where each feature came from. Reading the file back gives the same geometry.
-//
-// It lives under export because it is a writer like the others; the reader stays in
-// pantograph/partfile, where the part file's rules are.
-package parttoml
+// This file writes a pantograph.Part as a part file, the TOML text Read reads, laid out for a
+// machinist to read and edit, with comments saying where each feature came from. Reading the
+// file back gives the same geometry (see the round-trip tests).
+
+package partfile
 
 import (
 	"bufio"
@@ -40,11 +38,11 @@ func (e Encoder) Encode(w io.Writer, p pantograph.Part) error {
 	}
 	pw.head(p)
 	if err := pw.outlineTable("[profile]", p.Profile); err != nil {
-		return fmt.Errorf("parttoml: profile: %w", err)
+		return fmt.Errorf("partfile: profile: %w", err)
 	}
 	for _, f := range p.Features {
 		if err := pw.feature(f); err != nil {
-			return fmt.Errorf("parttoml: %s: %w", f.Label(), err)
+			return fmt.Errorf("partfile: %s: %w", f.Label(), err)
 		}
 	}
 	return pw.b.Flush()

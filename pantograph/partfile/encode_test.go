@@ -1,4 +1,4 @@
-package parttoml
+package partfile
 
 import (
 	"bytes"
@@ -7,7 +7,6 @@ import (
 
 	"panto/geom"
 	"panto/pantograph"
-	"panto/pantograph/partfile"
 )
 
 // samplePart is a part with every kind of feature a drawing gives: a profile of lines and
@@ -49,7 +48,7 @@ func TestRoundTrip(t *testing.T) {
 			if err := (Encoder{Header: []string{"written by a test"}}).Encode(&buf, want); err != nil {
 				t.Fatal(err)
 			}
-			got, err := partfile.Read("round.toml", buf.Bytes())
+			got, err := Read("round.toml", buf.Bytes())
 			if err != nil {
 				t.Fatalf("reading back: %v\n%s", err, buf.String())
 			}

@@ -1,46 +1,40 @@
-// Package planjson writes a template plan as JSON for scripts. The object is a view of
-// pantograph.Plan and computes nothing: every number is the plan's own, rounded to a nanometre
-// so float noise does not show.
+package main
+
+// This file prints a template plan as JSON for scripts (panto plan --json). The object is a view
+// of pantograph.Plan and computes nothing: every number is the plan's own, rounded to a
+// nanometre so float noise does not show.
 //
 // Lengths in the template frame (template bounds, feature bounds, seats, paths, compensation)
 // are template mm; datum and warning amounts are part mm; areas are template mm².
-package planjson
 
 import (
 	"encoding/json"
-	"fmt"
 	"io"
 
 	"panto/geom"
-	"panto/internal/numfmt"
 	"panto/pantograph"
 )
 
 type planJSON struct {
-	Part     string        `json:"part"`
-	File     string        `json:"file"`
-	Ratio    float64       `json:"ratio"`
-	Mirror   bool          `json:"mirror"`
-	Rotate   float64       `json:"rotate"` // degrees, counter-clockwise
-	Datum    [2]float64    `json:"datum"`
-	Template templateJSON  `json:"template"`
-	Features []featureJSON `json:"features"`
-	Order    []string      `json:"order"`
-	Steps    []stepJSON    `json:"steps"`
-	Warnings []warningJSON `json:"warnings"`
-	Done     bool          `json:"done"`
+	Part     string               `json:"part"`
+	File     string               `json:"file"`
+	Ratio    float64              `json:"ratio"`
+	Mirror   bool                 `json:"mirror"`
+	Rotate   float64              `json:"rotate"` // degrees, counter-clockwise
+	Datum    [2]float64           `json:"datum"`
+	Template templateJSON         `json:"template"`
+	Features []plannedFeatureJSON `json:"features"`
+	Order    []string             `json:"order"`
+	Steps    []stepJSON           `json:"steps"`
+	Warnings []warningJSON        `json:"warnings"`
+	Done     bool                 `json:"done"`
 }
 
 type templateJSON struct {
 	Bounds boundsJSON `json:"bounds"`
 }
 
-type boundsJSON struct {
-	Min [2]float64 `json:"min"`
-	Max [2]float64 `json:"max"`
-}
-
-type featureJSON struct {
+type plannedFeatureJSON struct {
 	Name           string       `json:"name"`
 	Kind           string       `json:"kind"`
 	Number         int          `json:"number"`
@@ -75,11 +69,6 @@ type warningJSON struct {
 	Stops   bool     `json:"stops,omitempty"`
 }
 
-// round rounds a length for JSON (numfmt.JSON: to a nanometre).
-func round(v float64) float64 { return numfmt.JSON(v) }
-
-func ptr(v float64) *float64 { r := round(v); return &r }
-
 func vec(v geom.Vec) [2]float64 { return [2]float64{round(v.X), round(v.Y)} }
 
 func vecs(vs []geom.Vec) [][2]float64 {
@@ -92,15 +81,15 @@ func vecs(vs []geom.Vec) [][2]float64 {
 
 func box(b geom.Box) boundsJSON { return boundsJSON{vec(b.Min), vec(b.Max)} }
 
-// Encode writes p to w as one indented JSON object.
-func Encode(w io.Writer, p pantograph.Plan) error {
+// writePlanJSON writes p to w as one indented JSON object.
+func writePlanJSON(w io.Writer, p pantograph.Plan) error {
 	out := planJSON{Part: p.Part, File: p.Source, Ratio: round(p.Ratio), Mirror: p.Mirror,
 		Rotate: round(p.Rotate.Degrees()), Datum: vec(p.Datum),
-		Template: templateJSON{box(p.Bounds)}, Features: []featureJSON{},
+		Template: templateJSON{box(p.Bounds)}, Features: []plannedFeatureJSON{},
 		Order: append([]string{}, p.Order...), Steps: []stepJSON{}, Warnings: []warningJSON{},
 		Done: p.Done()}
 	for _, f := range p.Features {
-		out.Features = append(out.Features, feature(f))
+		out.Features = append(out.Features, plannedFeature(f))
 	}
 	for _, s := range p.Steps {
 		sj := stepJSON{What: string(s.What), Seats: vecs(s.Seats)}
@@ -108,39 +97,39 @@ func Encode(w io.Writer, p pantograph.Plan) error {
 			sj.Feature = p.Features[s.Feature].Name
 		}
 		if s.Drill > 0 {
-			sj.Drill = ptr(s.Drill)
+			sj.Drill = roundPtr(s.Drill)
 		}
 		out.Steps = append(out.Steps, sj)
 	}
 	for _, wr := range p.Warnings {
 		wj := warningJSON{Feature: wr.Feature, Message: wr.Message, Stops: wr.Stops}
 		if wr.HasAmount {
-			wj.Amount = ptr(wr.Amount)
+			wj.Amount = roundPtr(wr.Amount)
 		}
 		out.Warnings = append(out.Warnings, wj)
 	}
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	if err := enc.Encode(out); err != nil {
-		return fmt.Errorf("planjson: %w", err)
+		return err
 	}
 	return nil
 }
 
 // feature is the JSON view of one planned feature; fields that do not apply to its method
 // are left out (cutter is null for drilled holes, depth is null for through features).
-func feature(f pantograph.PlannedFeature) featureJSON {
-	fj := featureJSON{Name: f.Name, Kind: string(f.Kind), Number: f.Number, Method: string(f.Method),
+func plannedFeature(f pantograph.PlannedFeature) plannedFeatureJSON {
+	fj := plannedFeatureJSON{Name: f.Name, Kind: string(f.Kind), Number: f.Number, Method: string(f.Method),
 		Stylus: round(f.Stylus), Tip: string(f.Tip), Compensation: round(f.Compensation),
 		Status: string(f.Status), Matched: round(f.Matched)}
 	switch {
 	case f.Depth.Through, f.Kind == pantograph.KindProfile, f.Kind == pantograph.KindCutout:
 		fj.Through = true
 	default:
-		fj.Depth = ptr(f.Depth.MM)
+		fj.Depth = roundPtr(f.Depth.MM)
 	}
 	if f.Cutter > 0 {
-		fj.Cutter = ptr(f.Cutter)
+		fj.Cutter = roundPtr(f.Cutter)
 	}
 	if !f.TemplateBounds.IsEmpty() {
 		b := box(f.TemplateBounds)
@@ -148,11 +137,11 @@ func feature(f pantograph.PlannedFeature) featureJSON {
 	}
 	switch f.Method {
 	case pantograph.Traced:
-		fj.TemplateArea = ptr(f.TemplateArea)
+		fj.TemplateArea = roundPtr(f.TemplateArea)
 	case pantograph.Drilled:
-		fj.Drill, fj.Seats = ptr(f.Drill), vecs(f.Seats)
+		fj.Drill, fj.Seats = roundPtr(f.Drill), vecs(f.Seats)
 	case pantograph.Engraved:
-		fj.Path, fj.Width = vecs(f.Path), ptr(f.Width)
+		fj.Path, fj.Width = vecs(f.Path), roundPtr(f.Width)
 	}
 	return fj
 }

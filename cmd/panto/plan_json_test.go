@@ -1,4 +1,4 @@
-package planjson
+package main
 
 import (
 	"bytes"
@@ -31,7 +31,7 @@ func plate(t *testing.T) pantograph.Plan {
 
 func TestEncode(t *testing.T) {
 	var buf bytes.Buffer
-	if err := Encode(&buf, plate(t)); err != nil {
+	if err := writePlanJSON(&buf, plate(t)); err != nil {
 		t.Fatal(err)
 	}
 	var got map[string]any
@@ -60,10 +60,10 @@ func TestEncode(t *testing.T) {
 func TestEncodeIsDeterministic(t *testing.T) {
 	var a, b bytes.Buffer
 	p := plate(t)
-	if err := Encode(&a, p); err != nil {
+	if err := writePlanJSON(&a, p); err != nil {
 		t.Fatal(err)
 	}
-	if err := Encode(&b, p); err != nil {
+	if err := writePlanJSON(&b, p); err != nil {
 		t.Fatal(err)
 	}
 	if !bytes.Equal(a.Bytes(), b.Bytes()) {
