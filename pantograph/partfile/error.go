@@ -1,8 +1,12 @@
 package partfile
 
 import (
+	"bytes"
+	"errors"
 	"fmt"
 	"strings"
+
+	"github.com/BurntSushi/toml"
 )
 
 // Error is a mistake in a part or machine file, placed as exactly as the reader can: the file,
@@ -31,4 +35,19 @@ func (e *Error) Error() string {
 	}
 	b.WriteString(e.Msg)
 	return b.String()
+}
+
+// syntaxError words a TOML syntax error. The line is worked out from the byte offset of the
+// error rather than taken from the library's line count, which has already moved past the
+// newline when a line ends too early (`[spindle` then a newline is reported on the next line).
+func syntaxError(name string, src []byte, err error) error {
+	var pe toml.ParseError
+	if !errors.As(err, &pe) {
+		return &Error{File: name, Msg: "not valid TOML: " + err.Error()}
+	}
+	line := pe.Position.Line
+	if at := pe.Position.Start; at > 0 && at <= len(src) {
+		line = 1 + bytes.Count(src[:at], []byte("\n"))
+	}
+	return &Error{File: name, Line: line, Msg: "not valid TOML: " + pe.Message}
 }

@@ -1,8 +1,6 @@
 package partfile
 
 import (
-	"bytes"
-	"errors"
 	"fmt"
 	"math"
 	"os"
@@ -93,21 +91,6 @@ func ReadMachine(name string, src []byte) (pantograph.Machine, error) {
 		}
 	}
 	return mc, nil
-}
-
-// syntaxError words a TOML syntax error. The line is worked out from the byte offset of the
-// error rather than taken from the library's line count, which has already moved past the
-// newline when a line ends too early (`[spindle` then a newline is reported on the next line).
-func syntaxError(name string, src []byte, err error) error {
-	var pe toml.ParseError
-	if !errors.As(err, &pe) {
-		return &Error{File: name, Msg: "not valid TOML: " + err.Error()}
-	}
-	line := pe.Position.Line
-	if at := pe.Position.Start; at > 0 && at <= len(src) {
-		line = 1 + bytes.Count(src[:at], []byte("\n"))
-	}
-	return &Error{File: name, Line: line, Msg: "not valid TOML: " + pe.Message}
 }
 
 // readMachineHead reads name and units; units set the scale of every later length.

@@ -31,7 +31,6 @@
 package partfile
 
 import (
-	"errors"
 	"fmt"
 	"os"
 	"slices"
@@ -58,11 +57,7 @@ func ReadFile(path string) (pantograph.Part, error) {
 func Read(name string, src []byte) (pantograph.Part, error) {
 	var m map[string]any
 	if _, err := toml.Decode(string(src), &m); err != nil {
-		var pe toml.ParseError
-		if errors.As(err, &pe) {
-			return pantograph.Part{}, &Error{File: name, Line: pe.Position.Line, Msg: "not valid TOML: " + pe.Message}
-		}
-		return pantograph.Part{}, &Error{File: name, Msg: "not valid TOML: " + err.Error()}
+		return pantograph.Part{}, syntaxError(name, src, err)
 	}
 	r := &reader{file: name, lines: indexLines(string(src)), scale: 1}
 	top := table{r: r, m: m}
