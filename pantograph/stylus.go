@@ -43,12 +43,37 @@ const matchTol = 0.0005
 // what a stylus is ground to (derived: rounding of products of numbers near 1..100 is ~1e-14).
 const tieTol = 1e-9
 
-// The plain-words directions a StylusChoice gives.
+// Direction is which way a compensation moves the template's traced edges.
+type Direction int
+
+// The directions. The zero value is DirectionNone.
 const (
-	DirectionNone   = "none: the stylus matches the cutter, the template is the part at full ratio"
-	DirectionGrow   = "the template's outline grows and its openings shrink"
-	DirectionShrink = "the template's outline shrinks and its openings grow"
+	DirectionNone   Direction = iota // the stylus matches: the template is R × the part
+	DirectionGrow                    // δ > 0: the outline grows, openings shrink
+	DirectionShrink                  // δ < 0: the outline shrinks, openings grow
 )
+
+// String says what the direction means for the template, as a sentence's worth of words.
+func (d Direction) String() string {
+	switch d {
+	case DirectionGrow:
+		return "the template's outline grows and its openings shrink"
+	case DirectionShrink:
+		return "the template's outline shrinks and its openings grow"
+	}
+	return "none: the stylus matches the cutter, the template is the part at full ratio"
+}
+
+// Word names the direction in one word for scripts: "none", "grow" or "shrink".
+func (d Direction) Word() string {
+	switch d {
+	case DirectionGrow:
+		return "grow"
+	case DirectionShrink:
+		return "shrink"
+	}
+	return "none"
+}
 
 // StylusChoice is the owned stylus chosen for a cutter at a ratio, and what using it means for
 // the template.
@@ -57,7 +82,7 @@ type StylusChoice struct {
 	Index        int     // the stylus's place in Machine.Styli
 	Matched      float64 // R·d_c, the stylus diameter that would need no compensation, mm
 	Compensation float64 // δ = R·r_c − r_s in template mm; see Compensation
-	Direction    string  // DirectionNone, DirectionGrow or DirectionShrink
+	Direction    Direction
 }
 
 // Matches reports whether the chosen stylus needs no compensation.
@@ -93,10 +118,10 @@ func better(a, b Stylus, want float64) bool {
 	return a.TracingDiameter() > b.TracingDiameter()+tieTol
 }
 
-// DirectionOf words which way a compensation δ (template mm) moves the template:
+// DirectionOf says which way a compensation δ (template mm) moves the template:
 // DirectionNone when |δ| is within half a thousandth of a millimetre, else DirectionGrow or
 // DirectionShrink.
-func DirectionOf(delta float64) string {
+func DirectionOf(delta float64) Direction {
 	switch {
 	case math.Abs(delta) <= matchTol:
 		return DirectionNone

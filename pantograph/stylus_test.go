@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"math/rand/v2"
+	"strings"
 	"testing"
 )
 
@@ -69,7 +70,7 @@ func TestChooseStylus(t *testing.T) {
 		ratio, cutter float64
 		want          string
 		delta         float64
-		dir           string
+		dir           Direction
 	}{
 		// derived: R·d_c = 3.0, the 3 mm stylus matches
 		{"exact match", set, 10, 0.3, "a3", 0, DirectionNone},
@@ -161,7 +162,7 @@ func ExampleChooseStylus() {
 func TestDirectionOf(t *testing.T) {
 	tests := []struct {
 		delta float64
-		want  string
+		want  Direction
 	}{
 		{0, DirectionNone},
 		{Compensation(3, 0.7, 2.1), DirectionNone}, // derived: 0 but for float rounding (2.0999999999999996)
@@ -175,6 +176,25 @@ func TestDirectionOf(t *testing.T) {
 	for _, tc := range tests {
 		if got := DirectionOf(tc.delta); got != tc.want {
 			t.Errorf("δ %v: got %q, want %q", tc.delta, got, tc.want)
+		}
+	}
+}
+
+func TestDirectionWords(t *testing.T) {
+	tests := []struct {
+		d          Direction
+		word, text string
+	}{
+		{DirectionNone, "none", "none: the stylus matches"},
+		{DirectionGrow, "grow", "outline grows and its openings shrink"},
+		{DirectionShrink, "shrink", "outline shrinks and its openings grow"},
+	}
+	for _, tc := range tests {
+		if got := tc.d.Word(); got != tc.word {
+			t.Errorf("%d.Word() = %q, want %q", tc.d, got, tc.word)
+		}
+		if got := tc.d.String(); !strings.Contains(got, tc.text) {
+			t.Errorf("%d.String() = %q, want it to say %q", tc.d, got, tc.text)
 		}
 	}
 }

@@ -229,11 +229,12 @@ func depthText(f pantograph.PlannedFeature) string {
 // compensationText says which way the template's edge moves and by how much.
 func compensationText(f pantograph.PlannedFeature) string {
 	d := f.Compensation
-	if num(d) == "0" {
+	dir := pantograph.DirectionOf(d)
+	if dir == pantograph.DirectionNone {
 		return "the stylus matches the cutter: no compensation, the template is the part at full ratio"
 	}
 	outline := f.Kind == pantograph.KindProfile
-	grows := d > 0 == outline
+	grows := dir == pantograph.DirectionGrow == outline
 	edge := "opening"
 	if outline {
 		edge = "outline"

@@ -145,7 +145,8 @@ type stylusReport struct {
 	stylus                       float64 // the stylus compensated for, mm
 	choice                       *pantograph.StylusChoice
 	delta                        float64 // δ in template mm
-	direction                    string  // "" when no stylus and cutter pair was worked out
+	direction                    pantograph.Direction
+	compensated                  bool // a stylus and cutter pair was worked out: delta and direction hold
 	warnings                     []string
 	failure                      string // why the job could not be done; "" when it was
 }
@@ -161,7 +162,7 @@ func (r *stylusReport) work() {
 	r.stylus = a.stylus
 	if a.hasCutter && a.hasStylus {
 		r.delta = pantograph.Compensation(a.ratio, a.cutter, a.stylus)
-		r.direction = pantograph.DirectionOf(r.delta)
+		r.direction, r.compensated = pantograph.DirectionOf(r.delta), true
 	}
 	if r.machine == nil {
 		return
@@ -176,7 +177,7 @@ func (r *stylusReport) work() {
 		return
 	}
 	r.choice, r.stylus = &c, c.Stylus.TracingDiameter()
-	r.delta, r.direction = c.Compensation, c.Direction
+	r.delta, r.direction, r.compensated = c.Compensation, c.Direction, true
 }
 
 // machineName names the machine in messages: its name, or its file.
@@ -217,7 +218,7 @@ func (r *stylusReport) writeText(w io.Writer) error {
 	} else if a.hasCutter && a.hasStylus {
 		line("stylus", r.length(a.stylus))
 	}
-	if r.direction != "" {
+	if r.compensated {
 		r.compensationLines(line)
 	}
 	_, err := io.WriteString(w, b.String())
@@ -293,7 +294,10 @@ func (r *stylusReport) writeJSON(w io.Writer) error {
 		v := numfmt.JSON(mm)
 		return &v
 	}
-	out := stylusJSON{Units: string(r.units), Ratio: a.ratio, Direction: jsonDirection(r.direction)}
+	out := stylusJSON{Units: string(r.units), Ratio: a.ratio}
+	if r.compensated {
+		out.Direction = r.direction.Word()
+	}
 	if a.hasCutter {
 		out.Cutter, out.MatchedStylus = conv(a.cutter), conv(r.matchedStylus)
 	} else {
@@ -309,24 +313,10 @@ func (r *stylusReport) writeJSON(w io.Writer) error {
 	if c := r.choice; c != nil {
 		out.Chosen = &chosenJSON{Name: c.Stylus.Name, Diameter: *conv(c.Stylus.Diameter), Tip: string(c.Stylus.Tip)}
 	}
-	if r.direction != "" {
+	if r.compensated {
 		out.Compensation, out.AtPart = conv(r.delta), conv(r.delta/a.ratio)
 	}
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(out)
-}
-
-// jsonDirection names a direction in one word for scripts: "grow" (the outline grows, openings
-// shrink), "shrink" (the other way), "none", or "" when no stylus was compensated for.
-func jsonDirection(d string) string {
-	switch d {
-	case pantograph.DirectionNone:
-		return "none"
-	case pantograph.DirectionGrow:
-		return "grow"
-	case pantograph.DirectionShrink:
-		return "shrink"
-	}
-	return ""
 }
