@@ -10,12 +10,29 @@ import (
 // gives no step-down for milling, so the milling rule below is common practice stated from
 // memory and the sheet says so.
 
-// Tool kinds for depth planning.
+// ToolKind is what a tool does to the stock. It decides the depth rule (passes or pecks), the
+// break-through allowance and the surface speed.
+type ToolKind int
+
+// The tool kinds.
 const (
-	ToolMill    = "mill"    // an end mill or slot drill tracing an edge
-	ToolEngrave = "engrave" // an engraver running along a groove
-	ToolDrill   = "drill"
+	ToolMill    ToolKind = iota + 1 // an end mill or slot drill tracing an edge
+	ToolEngrave                     // an engraver running along a groove
+	ToolDrill                       // a drill sunk at a seat
 )
+
+// String names the kind: "mill", "engrave" or "drill".
+func (k ToolKind) String() string {
+	switch k {
+	case ToolMill:
+		return "mill"
+	case ToolEngrave:
+		return "engrave"
+	case ToolDrill:
+		return "drill"
+	}
+	return "unknown tool"
+}
 
 // PassRule is a step-down rule with where it comes from.
 type PassRule struct {
@@ -48,7 +65,7 @@ const minStep = 0.01
 
 // MillPassRule returns the step-down for milling or engraving material with a tool of kind
 // and diameter d mm.
-func MillPassRule(kind string, d float64, material string) PassRule {
+func MillPassRule(kind ToolKind, d float64, material string) PassRule {
 	g, _ := MaterialGroup(material)
 	if kind == ToolEngrave {
 		return PassRule{engraveStep, fmt.Sprintf("engraver: %.2f mm per pass (common practice, from memory)", engraveStep)}
@@ -74,7 +91,7 @@ const drillPointShare = 0.3004
 // BreakThrough returns how far past the stock a through cut with a tool of kind and diameter d
 // must go: for a drill its point length plus the milling allowance, so the full diameter
 // comes through; for a cutter the allowance alone.
-func BreakThrough(kind string, d float64) float64 {
+func BreakThrough(kind ToolKind, d float64) float64 {
 	if kind == ToolDrill {
 		return drillPointShare*d + breakThroughMill
 	}
@@ -83,7 +100,7 @@ func BreakThrough(kind string, d float64) float64 {
 
 // TotalDepth returns how deep the tool goes for a feature of depth dep in stock thick mm: the
 // depth itself, or through the stock plus the break-through allowance.
-func TotalDepth(dep Depth, thick float64, kind string, d float64) float64 {
+func TotalDepth(dep Depth, thick float64, kind ToolKind, d float64) float64 {
 	if dep.Through {
 		return thick + BreakThrough(kind, d)
 	}

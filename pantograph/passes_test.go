@@ -54,7 +54,7 @@ func TestTotalDepth(t *testing.T) {
 	tests := []struct {
 		name string
 		dep  Depth
-		kind string
+		kind ToolKind
 		d    float64
 		want float64
 	}{
@@ -75,7 +75,7 @@ func TestTotalDepth(t *testing.T) {
 func TestMillPassRule(t *testing.T) {
 	tests := []struct {
 		name     string
-		kind     string
+		kind     ToolKind
 		d        float64
 		material string
 		want     float64

@@ -154,9 +154,9 @@ func (b sheetBuilder) tools() []string {
 // toolText names a feature's tool: "drill Ø0.6 mm hss" or "cutter Ø0.5 mm carbide".
 func (b sheetBuilder) toolText(f PlannedFeature) string {
 	if f.Method == Drilled {
-		return fmt.Sprintf("drill Ø%s mm %s", num(f.Drill), b.toolMaterial(f.Drill, true))
+		return fmt.Sprintf("drill Ø%s mm %s", num(f.Drill), b.toolMaterial(f.Drill, ToolDrill))
 	}
-	return fmt.Sprintf("cutter Ø%s mm %s", num(f.Cutter), b.toolMaterial(f.Cutter, false))
+	return fmt.Sprintf("cutter Ø%s mm %s", num(f.Cutter), b.toolMaterial(f.Cutter, ToolMill))
 }
 
 // stylusText names a feature's stylus.
@@ -167,10 +167,10 @@ func stylusText(f PlannedFeature) string {
 	return fmt.Sprintf("round stylus Ø%s mm", num(f.Stylus))
 }
 
-// toolMaterial returns the material of the owned tool of diameter d, "hss" when none is listed:
-// HSS speeds are the slower, so a guess never runs a tool too fast.
-func (b sheetBuilder) toolMaterial(d float64, drill bool) string {
-	if drill {
+// toolMaterial returns the material of the owned tool of kind and diameter d, "hss" when none
+// is listed: HSS speeds are the slower, so a guess never runs a tool too fast.
+func (b sheetBuilder) toolMaterial(d float64, kind ToolKind) string {
+	if kind == ToolDrill {
 		for _, t := range b.m.Drills {
 			if math.Abs(t.Diameter-d) <= sizeTol && t.Material != "" {
 				return t.Material

@@ -57,7 +57,7 @@ func (b sheetBuilder) drillRows(st Step) []SheetRow {
 		} else {
 			r.PassRule = "pecks as hole 1"
 		}
-		b.speed(&r, d, true)
+		b.speed(&r, d, ToolDrill)
 		out = append(out, r)
 	}
 	return out
@@ -82,7 +82,7 @@ func (b sheetBuilder) traceRow(st Step) SheetRow {
 	r := SheetRow{Number: f.Number, Feature: f.Name, What: st.What, Tool: b.toolText(f),
 		Stylus: stylusText(f), Where: b.at(startOf(f)), Depth: total, Through: dep.Through, Action: action,
 		Passes: passes(Passes(total, rule.StepDown)), PassRule: rule.Rule}
-	b.speed(&r, f.Cutter, false)
+	b.speed(&r, f.Cutter, kind)
 	return r
 }
 
@@ -119,18 +119,18 @@ func passes(depths []float64) []Pass {
 	return out
 }
 
-// speed fills in the spindle speed and feed guide of a row cut with a tool of d mm.
-func (b sheetBuilder) speed(r *SheetRow, d float64, drill bool) {
+// speed fills in the spindle speed and feed guide of a row cut with a tool of kind and d mm.
+func (b sheetBuilder) speed(r *SheetRow, d float64, kind ToolKind) {
 	if !(d > 0) {
 		return
 	}
-	sp := SpeedFor(b.m.Spindle, b.p.Stock.Material, b.toolMaterial(d, drill), d, drill)
+	sp := SpeedFor(b.m.Spindle, b.p.Stock.Material, b.toolMaterial(d, kind), d, kind)
 	r.RPM, r.SpeedNote = sp.RPM, sp.Note
 	flutes := 0
-	if c, ok := b.cutter(d); ok && !drill {
+	if c, ok := b.cutter(d); ok && kind != ToolDrill {
 		flutes = c.Flutes
 	}
-	if feed, rule, ok := FeedGuide(d, sp.RPM, flutes, drill); ok {
+	if feed, rule, ok := FeedGuide(d, sp.RPM, flutes, kind); ok {
 		r.Feed, r.FeedRule = feed, rule
 	}
 }

@@ -69,13 +69,13 @@ func MaterialGroup(material string) (string, bool) {
 	return groupTool, false
 }
 
-// SurfaceSpeed returns v_c in m/min for drilling (drill true) or milling a stock material
-// with a tool of toolMaterial ("hss" or "carbide"; anything else counts as HSS).
-func SurfaceSpeed(material, toolMaterial string, drill bool) float64 {
+// SurfaceSpeed returns v_c in m/min for a tool of kind and toolMaterial ("hss" or "carbide";
+// anything else counts as HSS) cutting a stock material. Engravers run at milling speeds.
+func SurfaceSpeed(material, toolMaterial string, kind ToolKind) float64 {
 	g, _ := MaterialGroup(material)
 	vd, vm := hssSpeed(g)
 	v := vm
-	if drill {
+	if kind == ToolDrill {
 		v = vd
 	}
 	if strings.EqualFold(toolMaterial, "carbide") {
@@ -96,10 +96,10 @@ type Speed struct {
 	Note         string // why RPM differs from Wanted, or that the material was guessed
 }
 
-// SpeedFor returns the spindle speed for a tool of diameter d mm and toolMaterial cutting
-// material on spindle s (drill true for drilling).
-func SpeedFor(s Spindle, material, toolMaterial string, d float64, drill bool) Speed {
-	vc := SurfaceSpeed(material, toolMaterial, drill)
+// SpeedFor returns the spindle speed for a tool of kind, diameter d mm and toolMaterial cutting
+// material on spindle s.
+func SpeedFor(s Spindle, material, toolMaterial string, d float64, kind ToolKind) Speed {
+	vc := SurfaceSpeed(material, toolMaterial, kind)
 	sp := Speed{SurfaceSpeed: vc, Wanted: RPM(vc, d)}
 	sp.RPM = sp.Wanted
 	var notes []string
@@ -135,13 +135,13 @@ const microDrillFeed = 0.001
 // two-fluted (common practice, no source).
 const defaultFlutes = 2
 
-// FeedGuide returns a feed in mm/min for a micro tool of diameter d mm at rpm, with the rule
-// it came from, or ok false for a tool that is not micro. flutes 0 means two.
-func FeedGuide(d, rpm float64, flutes int, drill bool) (feed float64, rule string, ok bool) {
+// FeedGuide returns a feed in mm/min for a micro tool of kind and diameter d mm at rpm, with
+// the rule it came from, or ok false for a tool that is not micro. flutes 0 means two.
+func FeedGuide(d, rpm float64, flutes int, kind ToolKind) (feed float64, rule string, ok bool) {
 	if d >= microTool {
 		return 0, "", false
 	}
-	if drill {
+	if kind == ToolDrill {
 		return microDrillFeed * rpm, "about 1 µm per rev for drills below 1 mm (from memory)", true
 	}
 	if flutes <= 0 {
