@@ -24,12 +24,20 @@ type Sheet struct {
 	Date         string // as given in SheetOptions
 	Layout       string // "mirrored", "turned 180°", or ""
 	Tools        []string
-	Dials        []DialInfo
+	Dials        SheetDials
 	Rows         []SheetRow
 	Warnings     []string
 	Notes        []string // the rules used and where they come from
 	Cautions     []string
 }
+
+// SheetDials are the five dials as the sheet uses them.
+type SheetDials struct {
+	CopyX, CopyY, WorkX, WorkY, Depth DialInfo
+}
+
+// List returns the dials in the order the sheet lists them: copy X and Y, work X and Y, depth.
+func (d SheetDials) List() []DialInfo { return []DialInfo{d.CopyX, d.CopyY, d.WorkX, d.WorkY, d.Depth} }
 
 // DialInfo describes one dial as the sheet uses it.
 type DialInfo struct {

@@ -156,12 +156,10 @@ func (b sheetBuilder) axes() []axis {
 }
 
 // readAll fills in every reading and back-off of rows and returns what each dial is set to.
-func (b sheetBuilder) readAll(rows []SheetRow) []DialInfo {
-	var infos []DialInfo
-	for _, a := range b.axes() {
-		infos = append(infos, b.readAxis(a, rows))
-	}
-	return append(infos, b.readDepth(rows))
+func (b sheetBuilder) readAll(rows []SheetRow) SheetDials {
+	ax := b.axes()
+	return SheetDials{CopyX: b.readAxis(ax[0], rows), CopyY: b.readAxis(ax[1], rows),
+		WorkX: b.readAxis(ax[2], rows), WorkY: b.readAxis(ax[3], rows), Depth: b.readDepth(rows)}
 }
 
 // readAxis reads one positioning dial along the rows, in order, with a back-off note on each

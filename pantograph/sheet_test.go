@@ -46,8 +46,8 @@ func TestBuildSheetRows(t *testing.T) {
 	// start 1 t 0 div. Copy Y: the datum's own wind-back, 0.5 mm below 0: 1 turn. Work X (1 mm
 	// screw, wind-back 13 div = 0.26 mm): −2 part mm − 0.26 needs 3 turns.
 	for i, want := range []int{11, 1, 3, 1} {
-		if got := s.Dials[i].DatumTurns; got != want {
-			t.Errorf("%s datum turns: got %v, want %v", s.Dials[i].Name, got, want)
+		if d := s.Dials.List()[i]; d.DatumTurns != want {
+			t.Errorf("%s datum turns: got %v, want %v", d.Name, d.DatumTurns, want)
 		}
 	}
 	tests := []struct {
@@ -124,7 +124,7 @@ func TestBuildSheetSpeedsAndDepth(t *testing.T) {
 
 func TestBuildSheetNoDials(t *testing.T) {
 	s := BuildSheet(sheetPlan(), Machine{}, SheetOptions{})
-	for _, d := range s.Dials {
+	for _, d := range s.Dials.List() {
 		if d.Stated {
 			t.Errorf("dial %s stated without a machine", d.Name)
 		}

@@ -35,7 +35,7 @@ func EncodeCSV(w io.Writer, s pantograph.Sheet) error {
 }
 
 // csvRow lays out one row.
-func csvRow(r pantograph.SheetRow, dials []pantograph.DialInfo) []string {
+func csvRow(r pantograph.SheetRow, dials pantograph.SheetDials) []string {
 	rec := []string{fmt.Sprint(r.Step), fmt.Sprint(r.Number), r.Feature, string(r.What), r.Action, r.Tool, r.Stylus}
 	p := r.Where
 	if p == nil {
@@ -47,13 +47,13 @@ func csvRow(r pantograph.SheetRow, dials []pantograph.DialInfo) []string {
 		}
 		return reading(x)
 	}
-	rec = append(rec, num(p.Template.X), num(p.Template.Y), rd(p.CopyX, dials[0]), rd(p.CopyY, dials[1]),
-		num(p.Part.X), num(p.Part.Y), rd(p.WorkX, dials[2]), rd(p.WorkY, dials[3]),
+	rec = append(rec, num(p.Template.X), num(p.Template.Y), rd(p.CopyX, dials.CopyX), rd(p.CopyY, dials.CopyY),
+		num(p.Part.X), num(p.Part.Y), rd(p.WorkX, dials.WorkX), rd(p.WorkY, dials.WorkY),
 		strings.Join(p.BackOff, "; "))
 	var depths, readings []string
 	for _, ps := range r.Passes {
 		depths = append(depths, num(ps.Depth))
-		readings = append(readings, rd(ps.Reading, dials[4]))
+		readings = append(readings, rd(ps.Reading, dials.Depth))
 	}
 	depth, rpm, feed := "", "", ""
 	if r.What != pantograph.StepDatum {

@@ -84,12 +84,12 @@ func stepTitle(r pantograph.SheetRow) string {
 }
 
 // positionLines gives the copy-table and work-table lines of a position.
-func positionLines(p *pantograph.Position, dials []pantograph.DialInfo) []string {
+func positionLines(p *pantograph.Position, dials pantograph.SheetDials) []string {
 	if p == nil {
 		return nil
 	}
-	copyLine := fmt.Sprintf("copy table  X %s  Y %s", axisText(p.CopyX, p.Template.X, dials[0]), axisText(p.CopyY, p.Template.Y, dials[1]))
-	workLine := fmt.Sprintf("work table  X %s  Y %s", axisText(p.WorkX, p.Part.X, dials[2]), axisText(p.WorkY, p.Part.Y, dials[3]))
+	copyLine := fmt.Sprintf("copy table  X %s  Y %s", axisText(p.CopyX, p.Template.X, dials.CopyX), axisText(p.CopyY, p.Template.Y, dials.CopyY))
+	workLine := fmt.Sprintf("work table  X %s  Y %s", axisText(p.WorkX, p.Part.X, dials.WorkX), axisText(p.WorkY, p.Part.Y, dials.WorkY))
 	out := []string{copyLine, workLine}
 	for _, b := range p.BackOff {
 		out = append(out, "first "+b)
@@ -180,7 +180,7 @@ func speedLine(r pantograph.SheetRow) string {
 }
 
 // rowLines gives every line under a row's heading.
-func rowLines(r pantograph.SheetRow, dials []pantograph.DialInfo) []string {
+func rowLines(r pantograph.SheetRow, dials pantograph.SheetDials) []string {
 	var out []string
 	if r.Tool != "" {
 		out = append(out, r.Tool+", "+r.Stylus)
@@ -188,7 +188,7 @@ func rowLines(r pantograph.SheetRow, dials []pantograph.DialInfo) []string {
 		out = append(out, r.Action)
 	}
 	out = append(out, positionLines(r.Where, dials)...)
-	out = append(out, depthLines(r, dials[4])...)
+	out = append(out, depthLines(r, dials.Depth)...)
 	if s := speedLine(r); s != "" {
 		out = append(out, s)
 	}

@@ -89,7 +89,7 @@ func EncodeJSON(w io.Writer, s pantograph.Sheet) error {
 	out := sheetJSON{Part: s.Part, File: s.Source, Material: s.Material, Thickness: nm(s.Thickness),
 		Ratio: s.Ratio, Layout: s.Layout, Machine: s.Machine, Date: s.Date, Tools: nonNil(s.Tools),
 		Warnings: nonNil(s.Warnings), Notes: nonNil(s.Notes), Cautions: nonNil(s.Cautions)}
-	for _, d := range s.Dials {
+	for _, d := range s.Dials.List() {
 		out.Dials = append(out.Dials, dialJSON{Name: d.Name, Stated: d.Stated, Pitch: d.Pitch,
 			Divisions: d.Divisions, Units: string(d.Units), Division: nm(d.Division), AtPart: nm(d.AtPart),
 			DatumTurns: d.DatumTurns, BackOff: nm(d.BackOff)})
@@ -103,19 +103,19 @@ func EncodeJSON(w io.Writer, s pantograph.Sheet) error {
 }
 
 // rowOf converts one row.
-func rowOf(r pantograph.SheetRow, dials []pantograph.DialInfo) rowJSON {
+func rowOf(r pantograph.SheetRow, dials pantograph.SheetDials) rowJSON {
 	rj := rowJSON{Step: r.Step, Number: r.Number, Feature: r.Feature, Kind: string(r.What),
 		Action: r.Action, Tool: r.Tool, Stylus: r.Stylus, Depth: nm(r.Depth), PassRule: r.PassRule,
 		RPM: math.Round(r.RPM), SpeedNote: r.SpeedNote, Feed: nm(r.Feed), FeedRule: r.FeedRule,
 		Passes: []passJSON{}}
 	if p := r.Where; p != nil {
 		rj.Where = &positionJSON{Template: [2]float64{nm(p.Template.X), nm(p.Template.Y)},
-			Part: [2]float64{nm(p.Part.X), nm(p.Part.Y)}, CopyX: readingOf(p.CopyX, dials[0]),
-			CopyY: readingOf(p.CopyY, dials[1]), WorkX: readingOf(p.WorkX, dials[2]),
-			WorkY: readingOf(p.WorkY, dials[3]), WindBack: nonNil(p.BackOff)}
+			Part: [2]float64{nm(p.Part.X), nm(p.Part.Y)}, CopyX: readingOf(p.CopyX, dials.CopyX),
+			CopyY: readingOf(p.CopyY, dials.CopyY), WorkX: readingOf(p.WorkX, dials.WorkX),
+			WorkY: readingOf(p.WorkY, dials.WorkY), WindBack: nonNil(p.BackOff)}
 	}
 	for _, ps := range r.Passes {
-		rj.Passes = append(rj.Passes, passJSON{Depth: nm(ps.Depth), Reading: readingOf(ps.Reading, dials[4])})
+		rj.Passes = append(rj.Passes, passJSON{Depth: nm(ps.Depth), Reading: readingOf(ps.Reading, dials.Depth)})
 	}
 	return rj
 }

@@ -151,7 +151,7 @@ func layout(f *flow, s pantograph.Sheet) {
 	}
 	f.rule()
 	f.text(0, sizeHead, true, "Dials")
-	for _, d := range s.Dials {
+	for _, d := range s.Dials.List() {
 		f.labelled(d.Name, dialLine(d))
 	}
 	f.rule()
@@ -176,7 +176,7 @@ func (f *flow) labelled(label, value string) {
 }
 
 // step sets one step: a tick box and heading, then its lines, kept on one page.
-func (f *flow) step(r pantograph.SheetRow, dials []pantograph.DialInfo) {
+func (f *flow) step(r pantograph.SheetRow, dials pantograph.SheetDials) {
 	lines := rowLines(r, dials)
 	f.need(float64(len(lines)+2) * sizeReading * 0.3528 * lineGap)
 	f.space(2)

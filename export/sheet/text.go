@@ -30,7 +30,7 @@ func EncodeText(w io.Writer, s pantograph.Sheet) error {
 		line("", labelWidth, padRight(h[0], labelWidth)+h[1])
 	}
 	bw.WriteString("\nDials\n")
-	for _, d := range s.Dials {
+	for _, d := range s.Dials.List() {
 		line("  ", 8, padRight(d.Name, 8)+dialLine(d))
 	}
 	section(bw, line, "Warnings", s.Warnings, "none: every feature comes out as drawn")
