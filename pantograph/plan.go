@@ -19,15 +19,11 @@ type Plan struct {
 	Part   string // the part's name
 	Source string // the part file, for messages
 	Stock  Stock
-	Setup  Setup // as given, after validation
-
-	Ratio  float64
-	Mirror bool
-	Rotate geom.Angle
+	Setup  Setup    // as given, after validation: the ratio, tools and layout
 	Datum  geom.Vec // part frame: the point the dials are zeroed on, template origin
 
 	// Transform maps the part frame to the template frame: translate(−Datum), then FlipX when
-	// Mirror, then Rotate, then Scale(Ratio).
+	// Setup.Mirror, then Setup.Rotate, then Scale(Setup.Ratio).
 	Transform geom.Transform
 
 	// Bounds holds everything on the template: traced regions, seats (with room for the
@@ -190,8 +186,8 @@ func PlanPart(p Part, s Setup, m *Machine) (Plan, error) {
 		return Plan{}, errs
 	}
 	pl := planner{part: p, setup: s, machine: m, t: s.Transform(p.Datum)}
-	out := Plan{Part: p.Name, Source: p.Source, Stock: p.Stock, Setup: s, Ratio: s.Ratio,
-		Mirror: s.Mirror, Rotate: s.Rotate, Datum: p.Datum, Transform: pl.t}
+	out := Plan{Part: p.Name, Source: p.Source, Stock: p.Stock, Setup: s, Datum: p.Datum,
+		Transform: pl.t}
 	out.Warnings = partWarnings(p, probs)
 	for _, f := range p.All() {
 		pf, ws := pl.plan(f)

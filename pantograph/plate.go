@@ -237,14 +237,14 @@ func newPlateDesign(p Plan, m *Machine, o PlateOptions) *plateDesign {
 		}
 	}
 	d.pl.WallHeight = math.Max(minWallHeight, d.stylus)
-	d.pl.ChordTolerance = math.Min(maxPlateChord, p.Ratio*partChordError)
+	d.pl.ChordTolerance = math.Min(maxPlateChord, p.Setup.Ratio*partChordError)
 	d.pl.Base = plateBase
 	d.surface, d.islandTop = plateBase, plateBase+d.pl.WallHeight
 	if d.o.Style == StyleGroove {
 		d.pl.Base = plateBase + d.pl.WallHeight
 		d.surface, d.islandTop = d.pl.Base, d.pl.Base
 	}
-	d.pl.Title = fmt.Sprintf("%s %g:1 STYLUS %g CUTTER %g", p.Part, p.Ratio, d.stylus, p.Setup.Cutter)
+	d.pl.Title = fmt.Sprintf("%s %g:1 STYLUS %g CUTTER %g", p.Part, p.Setup.Ratio, d.stylus, p.Setup.Cutter)
 	d.newFixing(m)
 	return d
 }
@@ -424,7 +424,7 @@ func (d *plateDesign) seats() error {
 	for _, f := range d.plan.Features {
 		for _, s := range f.Seats {
 			datum := s.Near(geom.Vec{}) || s.Dist(geom.Vec{}) < 1e-6
-			d.seat(s, f.Number, f.Drill*d.plan.Ratio, datum)
+			d.seat(s, f.Number, f.Drill*d.plan.Setup.Ratio, datum)
 			datumDone = datumDone || datum
 		}
 	}

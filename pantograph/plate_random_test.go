@@ -26,7 +26,7 @@ func randomPlanSized(rng *rand.Rand, nx, ny int) pantograph.Plan {
 	if rng.Intn(3) == 0 {
 		tip = pantograph.TipPointed
 	}
-	p := pantograph.Plan{Part: fmt.Sprintf("random %d", rng.Int63()%1000), Ratio: 10,
+	p := pantograph.Plan{Part: fmt.Sprintf("random %d", rng.Int63()%1000),
 		Setup: pantograph.Setup{Ratio: 10, Cutter: stylus / 10, Tip: tip}}
 	prof := geom.NewRegion(outline)
 	p.Features = append(p.Features, pantograph.PlannedFeature{Name: "profile", Label: "[profile]",

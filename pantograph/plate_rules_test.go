@@ -14,7 +14,7 @@ import (
 func squarePlan(stylus float64, tip pantograph.Tip) pantograph.Plan {
 	c, _ := geom.Rect(geom.V(-20, -15), geom.V(100, 60), 0)
 	prof := geom.NewRegion(c)
-	p := pantograph.Plan{Part: "test block", Ratio: 10, Setup: pantograph.Setup{Ratio: 10, Cutter: 0.5, Tip: tip}}
+	p := pantograph.Plan{Part: "test block", Setup: pantograph.Setup{Ratio: 10, Cutter: 0.5, Tip: tip}}
 	p.Features = []pantograph.PlannedFeature{
 		{Name: "profile", Label: "[profile]", Kind: pantograph.KindProfile, Number: 2, Stylus: stylus, Tip: tip,
 			TemplateRegions: []geom.Region{prof}, TemplateBounds: prof.Bounds()},
@@ -185,7 +185,7 @@ func TestPlateNoDatumSeatOnAnEdge(t *testing.T) {
 }
 
 func TestPlateRejectsEmptyPlan(t *testing.T) {
-	if _, err := pantograph.BuildPlate(pantograph.Plan{Ratio: 10, Bounds: geom.EmptyBox()}, nil, pantograph.PlateOptions{}); err == nil {
+	if _, err := pantograph.BuildPlate(pantograph.Plan{Setup: pantograph.Setup{Ratio: 10}, Bounds: geom.EmptyBox()}, nil, pantograph.PlateOptions{}); err == nil {
 		t.Errorf("got no error for a plan with nothing on the template")
 	}
 }

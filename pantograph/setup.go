@@ -115,16 +115,16 @@ func machineWarnings(p Plan, m *Machine) []PlanWarning {
 		return nil
 	}
 	var ws []PlanWarning
-	if w, ok := ratioWarning(p.Ratio, m.Ratio); ok {
+	if w, ok := ratioWarning(p.Setup.Ratio, m.Ratio); ok {
 		ws = append(ws, w)
 	}
 	ws = append(ws, toolWarnings(p, m)...)
 	size := p.Bounds.Size()
 	if t := m.CopyTable; t.X > 0 && size.X > t.X+sizeTol || t.Y > 0 && size.Y > t.Y+sizeTol {
 		over := math.Max(size.X-t.X, size.Y-t.Y)
-		ws = append(ws, PlanWarning{Stops: true, Amount: over / p.Ratio, HasAmount: true,
+		ws = append(ws, PlanWarning{Stops: true, Amount: over / p.Setup.Ratio, HasAmount: true,
 			Message: fmt.Sprintf("the template is %s x %s mm but the copy table travels only %s x %s mm: a ratio of about %s:1 or less fits",
-				num(size.X), num(size.Y), num(t.X), num(t.Y), num(fittingRatio(p.Ratio, size, t)))})
+				num(size.X), num(size.Y), num(t.X), num(t.Y), num(fittingRatio(p.Setup.Ratio, size, t)))})
 	}
 	if b := m.Printer.Bed; b.X > 0 && b.Y > 0 && !fits(size, b) {
 		ws = append(ws, PlanWarning{Message: fmt.Sprintf(

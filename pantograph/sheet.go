@@ -110,7 +110,7 @@ func Cautions() []string {
 // BuildSheet makes the sheet for plan p on machine m.
 func BuildSheet(p Plan, m Machine, o SheetOptions) Sheet {
 	s := Sheet{Part: p.Part, Source: p.Source, Material: p.Stock.Material, Thickness: p.Stock.Thickness,
-		Ratio: p.Ratio, Machine: m.Name, Date: o.Date, Layout: layoutWords(p), Cautions: Cautions()}
+		Ratio: p.Setup.Ratio, Machine: m.Name, Date: o.Date, Layout: layoutWords(p), Cautions: Cautions()}
 	b := sheetBuilder{p: p, m: m}
 	s.Tools = b.tools()
 	s.Rows = b.rows()
@@ -124,10 +124,10 @@ func BuildSheet(p Plan, m Machine, o SheetOptions) Sheet {
 
 // layoutWords says how the template lies on the copy table when not plainly.
 func layoutWords(p Plan) string {
-	switch d := p.Rotate.Degrees(); {
-	case p.Mirror && d != 0:
+	switch d := p.Setup.Rotate.Degrees(); {
+	case p.Setup.Mirror && d != 0:
 		return fmt.Sprintf("mirrored, then turned %s°", num(d))
-	case p.Mirror:
+	case p.Setup.Mirror:
 		return "mirrored left for right"
 	case d != 0:
 		return fmt.Sprintf("turned %s° anticlockwise", num(d))

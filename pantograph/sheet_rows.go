@@ -32,7 +32,7 @@ func (b sheetBuilder) rows() []SheetRow {
 
 // at returns a position at template point t.
 func (b sheetBuilder) at(t geom.Vec) *Position {
-	return &Position{Template: t, Part: t.Mul(1 / b.p.Ratio)}
+	return &Position{Template: t, Part: t.Mul(1 / b.p.Setup.Ratio)}
 }
 
 // drillRows gives a row for each seat of a drill step; the pecks go on the first.
@@ -148,8 +148,8 @@ type axis struct {
 func (b sheetBuilder) axes() []axis {
 	ds := b.m.Dials
 	return []axis{
-		{"copy X", ds.CopyX, b.p.Ratio, func(p *Position) float64 { return p.Template.X }, func(p *Position, r Reading) { p.CopyX = r }},
-		{"copy Y", ds.CopyY, b.p.Ratio, func(p *Position) float64 { return p.Template.Y }, func(p *Position, r Reading) { p.CopyY = r }},
+		{"copy X", ds.CopyX, b.p.Setup.Ratio, func(p *Position) float64 { return p.Template.X }, func(p *Position, r Reading) { p.CopyX = r }},
+		{"copy Y", ds.CopyY, b.p.Setup.Ratio, func(p *Position) float64 { return p.Template.Y }, func(p *Position, r Reading) { p.CopyY = r }},
 		{"work X", ds.WorkX, 1, func(p *Position) float64 { return p.Part.X }, func(p *Position, r Reading) { p.WorkX = r }},
 		{"work Y", ds.WorkY, 1, func(p *Position) float64 { return p.Part.Y }, func(p *Position, r Reading) { p.WorkY = r }},
 	}

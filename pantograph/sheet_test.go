@@ -14,7 +14,7 @@ import (
 func sheetPlan() Plan {
 	sq := geom.Polygon(geom.V(-20, 30), geom.V(0, 30), geom.V(0, 50), geom.V(-20, 50))
 	return Plan{
-		Part: "test plate", Stock: Stock{Material: "brass", Thickness: 1.2}, Ratio: 10,
+		Part: "test plate", Stock: Stock{Material: "brass", Thickness: 1.2}, Setup: Setup{Ratio: 10},
 		Features: []PlannedFeature{
 			{Name: "pins", Kind: KindHoles, Number: 1, Method: Drilled, Drill: 0.6, Stylus: 3, Tip: TipPointed,
 				Depth: Depth{Through: true}, Seats: []geom.Vec{geom.V(60, 20), geom.V(40, 20)}},

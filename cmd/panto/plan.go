@@ -146,7 +146,7 @@ func them(n int) string {
 // writePlan prints the plan in a machinist's words.
 func writePlan(w io.Writer, p pantograph.Plan) {
 	fmt.Fprintf(w, "plan for %s  (%s)\n", p.Part, p.Source)
-	fmt.Fprintf(w, "  ratio       %s:1, the template %s times the part%s\n", num(p.Ratio), num(p.Ratio), layout(p))
+	fmt.Fprintf(w, "  ratio       %s:1, the template %s times the part%s\n", num(p.Setup.Ratio), num(p.Setup.Ratio), layout(p))
 	size := p.Bounds.Size()
 	fmt.Fprintf(w, "  template    %s x %s mm, from %s to %s on the copy table\n",
 		num(size.X), num(size.Y), at(p.Bounds.Min), at(p.Bounds.Max))
@@ -174,10 +174,10 @@ func writePlan(w io.Writer, p pantograph.Plan) {
 // layout says how the template is laid on the copy table, when not plainly.
 func layout(p pantograph.Plan) string {
 	var s string
-	if p.Mirror {
+	if p.Setup.Mirror {
 		s += ", mirrored left for right"
 	}
-	if d := p.Rotate.Degrees(); d != 0 {
+	if d := p.Setup.Rotate.Degrees(); d != 0 {
 		s += fmt.Sprintf(", turned %s° anticlockwise", num(d))
 	}
 	return s

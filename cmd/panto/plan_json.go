@@ -83,8 +83,8 @@ func box(b geom.Box) boundsJSON { return boundsJSON{vec(b.Min), vec(b.Max)} }
 
 // writePlanJSON writes p to w as one indented JSON object.
 func writePlanJSON(w io.Writer, p pantograph.Plan) error {
-	out := planJSON{Part: p.Part, File: p.Source, Ratio: round(p.Ratio), Mirror: p.Mirror,
-		Rotate: round(p.Rotate.Degrees()), Datum: vec(p.Datum),
+	out := planJSON{Part: p.Part, File: p.Source, Ratio: round(p.Setup.Ratio), Mirror: p.Setup.Mirror,
+		Rotate: round(p.Setup.Rotate.Degrees()), Datum: vec(p.Datum),
 		Template: templateJSON{box(p.Bounds)}, Features: []plannedFeatureJSON{},
 		Order: append([]string{}, p.Order...), Steps: []stepJSON{}, Warnings: []warningJSON{},
 		Done: p.Done()}

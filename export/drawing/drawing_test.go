@@ -14,7 +14,7 @@ import (
 
 // seatPlan is a template w × h mm with two seats 100 mm apart at (20, 20) and (120, 20).
 func seatPlan(w, h float64) pantograph.Plan {
-	return pantograph.Plan{Part: "test plate", Ratio: 10, Bounds: geom.Box{Max: geom.V(w, h)},
+	return pantograph.Plan{Part: "test plate", Setup: pantograph.Setup{Ratio: 10}, Bounds: geom.Box{Max: geom.V(w, h)},
 		Features: []pantograph.PlannedFeature{{Name: "pins", Kind: pantograph.KindHoles, Number: 1,
 			Stylus: 4, Seats: []geom.Vec{geom.V(20, 20), geom.V(120, 20)}}}}
 }

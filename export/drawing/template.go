@@ -140,12 +140,12 @@ func (l templateLayout) footer(pen Pen, off geom.Vec) {
 // templateScaleNote states units and scale in words.
 func templateScaleNote(p pantograph.Plan) string {
 	s := fmt.Sprintf("Scale 1:1 at template size, units mm. Ratio %s:1: the part is 1/%s of this.",
-		trim(p.Ratio), trim(p.Ratio))
+		trim(p.Setup.Ratio), trim(p.Setup.Ratio))
 	var lay []string
-	if p.Mirror {
+	if p.Setup.Mirror {
 		lay = append(lay, "mirrored")
 	}
-	if d := p.Rotate.Degrees(); d != 0 {
+	if d := p.Setup.Rotate.Degrees(); d != 0 {
 		lay = append(lay, "turned "+trim(d)+"°")
 	}
 	if len(lay) > 0 {
