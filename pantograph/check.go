@@ -78,10 +78,10 @@ func checkStock(p Part) []Problem {
 	where := p.Profile.Where
 	switch {
 	case t == 0:
-		return []Problem{{Severity: Error, Feature: "[stock]", Where: where,
+		return []Problem{{Severity: Error, Label: "[stock]", Where: where,
 			Message: "stock thickness missing: give [stock] thickness so depths can be checked"}}
 	case !(t > 0) || math.IsInf(t, 0):
-		return []Problem{{Severity: Error, Feature: "[stock]", Where: where,
+		return []Problem{{Severity: Error, Label: "[stock]", Where: where,
 			Message: "stock thickness must be greater than 0, got " + num(t)}}
 	}
 	return nil

@@ -165,7 +165,7 @@ func TestCheckMinWallOption(t *testing.T) {
 }
 
 func TestProblemError(t *testing.T) {
-	p := Problem{Severity: Error, Feature: `[[holes]] "pivots"`, Message: "no hole positions given",
+	p := Problem{Severity: Error, Feature: "pivots", Label: `[[holes]] "pivots"`, Message: "no hole positions given",
 		Where: Where{File: "bridge.toml", Line: 14}}
 	want := `bridge.toml:14: error: [[holes]] "pivots": no hole positions given`
 	if got := p.Error(); got != want {

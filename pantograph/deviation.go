@@ -45,8 +45,8 @@ const fitTol = 1e-7
 
 // openingFit checks openings or recesses rs, all cut from inside with a cutter of diameter d.
 // Holes of one milled feature share their fate, so only the first that deviates is described.
-func openingFit(pf PlannedFeature, rs []geom.Region, d float64) (Status, []PlanWarning) {
-	st, ws, more := StatusOK, []PlanWarning(nil), 0
+func openingFit(pf PlannedFeature, rs []geom.Region, d float64) (Status, []Problem) {
+	st, ws, more := StatusOK, []Problem(nil), 0
 	for _, r := range rs {
 		s, w := openingFitOne(pf, r, d)
 		st = worse(st, s)
@@ -65,7 +65,7 @@ func openingFit(pf PlannedFeature, rs []geom.Region, d float64) (Status, []PlanW
 }
 
 // openingFitOne checks one region cut from inside.
-func openingFitOne(pf PlannedFeature, r geom.Region, d float64) (Status, []PlanWarning) {
+func openingFitOne(pf PlannedFeature, r geom.Region, d float64) (Status, []Problem) {
 	rc := d/2 - fitTol
 	centre := r.Offset(-rc).Regions
 	if len(centre) == 0 {
@@ -73,11 +73,11 @@ func openingFitOne(pf PlannedFeature, r geom.Region, d float64) (Status, []PlanW
 		if g, ok := r.NarrowestWidth(); ok {
 			amount, width = d-g.Width, mm(g.Width)+" wide at its narrowest"
 		}
-		return StatusLost, []PlanWarning{amountWarn(pf, amount,
+		return StatusLost, []Problem{amountWarn(pf, amount,
 			"%s, smaller than the Ø%s cutter: the cutter cannot go in, nothing of it is cut", width, num(d))}
 	}
 	cut := geom.OffsetRegions(centre, rc)
-	var ws []PlanWarning
+	var ws []Problem
 	if len(centre) > 1 {
 		ws = append(ws, neckWarning(pf, r, d, len(centre)))
 	}
@@ -88,10 +88,10 @@ func openingFitOne(pf PlannedFeature, r geom.Region, d float64) (Status, []PlanW
 }
 
 // profileFit checks the profile, cut round from outside with a cutter of diameter d.
-func profileFit(pf PlannedFeature, r geom.Region, d float64) (Status, []PlanWarning) {
+func profileFit(pf PlannedFeature, r geom.Region, d float64) (Status, []Problem) {
 	rc := d/2 - fitTol
 	made := geom.OffsetRegions(r.Offset(rc).Regions, -rc)
-	var ws []PlanWarning
+	var ws []Problem
 	if g, ok := r.NarrowestGap(); ok && g.Width < d-deviationTol {
 		at := g.A.Lerp(g.B, 0.5)
 		ws = append(ws, amountWarn(pf, d-g.Width,
@@ -105,7 +105,7 @@ func profileFit(pf PlannedFeature, r geom.Region, d float64) (Status, []PlanWarn
 }
 
 // neckWarning describes an opening the cutter can only cut as n separate pieces.
-func neckWarning(pf PlannedFeature, r geom.Region, d float64, n int) PlanWarning {
+func neckWarning(pf PlannedFeature, r geom.Region, d float64, n int) Problem {
 	g, ok := r.NarrowestWidth()
 	if !ok {
 		return warnf(pf, "the Ø%s cutter cannot pass its narrowest place: it comes out as %d separate openings", num(d), n)
@@ -119,7 +119,7 @@ func neckWarning(pf PlannedFeature, r geom.Region, d float64, n int) PlanWarning
 // cornerWarning describes the material a cutter of diameter d leaves in corner c, as the
 // distance from the drawn corner to the edge the cutter makes (cut). For a sharp corner of
 // inside angle θ that is r(1/sin(θ/2) − 1); r(√2 − 1) at 90°.
-func cornerWarning(pf PlannedFeature, c geom.Corner, d float64, cut []geom.Region) []PlanWarning {
+func cornerWarning(pf PlannedFeature, c geom.Corner, d float64, cut []geom.Region) []Problem {
 	left := math.Inf(1)
 	for _, r := range cut {
 		for _, k := range r.Contours() {
@@ -133,14 +133,14 @@ func cornerWarning(pf PlannedFeature, c geom.Corner, d float64, cut []geom.Regio
 	if c.Radius > 0 {
 		drawn = "R" + num(c.Radius)
 	}
-	return []PlanWarning{amountWarn(pf, left,
+	return []Problem{amountWarn(pf, left,
 		"the inside corner at %s is drawn %s; the Ø%s cutter rounds it to R%s and leaves %s of material in the corner",
 		pt(c.At.X, c.At.Y), drawn, num(d), num(d/2), mm(left))}
 }
 
 // areaWarnings adds the area a cutter leaves (uncut, mm²) to the warnings about a feature and
 // returns its status. Differences within deviationTol of the outline all round count as none.
-func areaWarnings(pf PlannedFeature, ws []PlanWarning, uncut, perimeter float64) (Status, []PlanWarning) {
+func areaWarnings(pf PlannedFeature, ws []Problem, uncut, perimeter float64) (Status, []Problem) {
 	if uncut <= deviationTol*perimeter {
 		if len(ws) == 0 {
 			return StatusOK, nil
@@ -152,7 +152,7 @@ func areaWarnings(pf PlannedFeature, ws []PlanWarning, uncut, perimeter float64)
 		a = fmt.Sprintf("%.2g mm² in all stays uncut", uncut)
 	}
 	if len(ws) == 0 {
-		return StatusDeviates, []PlanWarning{warnf(pf, "the cutter cannot reach every part of it: %s", a)}
+		return StatusDeviates, []Problem{warnf(pf, "the cutter cannot reach every part of it: %s", a)}
 	}
 	ws[len(ws)-1].Message += "; " + a
 	return StatusDeviates, ws
@@ -177,12 +177,12 @@ func worse(a, b Status) Status {
 }
 
 // warnf builds a warning about a planned feature, without an amount.
-func warnf(pf PlannedFeature, format string, args ...any) PlanWarning {
-	return PlanWarning{Feature: pf.Name, Label: pf.Label, Message: fmt.Sprintf(format, args...)}
+func warnf(pf PlannedFeature, format string, args ...any) Problem {
+	return Problem{Severity: Warning, Feature: pf.Name, Label: pf.Label, Message: fmt.Sprintf(format, args...)}
 }
 
 // amountWarn builds a warning about a planned feature with an amount in mm at the part.
-func amountWarn(pf PlannedFeature, amount float64, format string, args ...any) PlanWarning {
+func amountWarn(pf PlannedFeature, amount float64, format string, args ...any) Problem {
 	w := warnf(pf, format, args...)
 	w.Amount, w.HasAmount = amount, true
 	return w

@@ -53,7 +53,7 @@ func TestOversizeStylus(t *testing.T) {
 			if !tc.deviates {
 				return
 			}
-			var w PlanWarning
+			var w Problem
 			for _, x := range p.Warnings {
 				if strings.Contains(x.Message, "larger than the matched") {
 					w = x

@@ -35,7 +35,7 @@ type Plan struct {
 	Steps    []Step           // the order of work, datum first, profile last
 	Order    []string         // feature names in working order, each once
 
-	Warnings []PlanWarning // what will not come out as drawn, what the machine cannot do
+	Warnings []Problem // warnings: what will not come out as drawn, what the machine cannot do
 }
 
 // Method is how a feature is made.
@@ -112,26 +112,6 @@ const (
 	StepEngrave StepKind = "engrave" // run along a groove
 )
 
-// PlanWarning is something the plan says will not come out as drawn, or that the machine cannot
-// do. Amount is in mm at the part when HasAmount.
-type PlanWarning struct {
-	Feature   string // the feature's name; "" for the whole plan
-	Label     string // the feature's label, for messages
-	Message   string
-	Amount    float64
-	HasAmount bool
-	// Stops is true when the job cannot be done as planned whatever the machinist accepts
-	// (the template does not fit the copy table, the ratio cannot be set).
-	Stops bool
-}
-
-func (w PlanWarning) String() string {
-	if w.Label == "" {
-		return w.Message
-	}
-	return w.Label + ": " + w.Message
-}
-
 // Lost returns the names of the features the cutter cannot make.
 func (p Plan) Lost() []string {
 	var out []string
@@ -188,7 +168,7 @@ func PlanPart(p Part, s Setup, m *Machine) (Plan, error) {
 	pl := planner{part: p, setup: s, machine: m, t: s.Transform(p.Datum)}
 	out := Plan{Part: p.Name, Source: p.Source, Stock: p.Stock, Setup: s, Datum: p.Datum,
 		Transform: pl.t}
-	out.Warnings = partWarnings(p, probs)
+	out.Warnings = partWarnings(probs)
 	for _, f := range p.All() {
 		pf, ws := pl.plan(f)
 		out.Features = append(out.Features, pf)
@@ -206,15 +186,12 @@ func PlanPart(p Part, s Setup, m *Machine) (Plan, error) {
 }
 
 // partWarnings carries the part's own warnings (thin walls, say) into the plan.
-func partWarnings(p Part, probs []Problem) []PlanWarning {
-	names := map[string]string{}
-	for _, f := range p.All() {
-		names[f.Label()] = featureName(f)
-	}
-	var ws []PlanWarning
+func partWarnings(probs []Problem) []Problem {
+	var ws []Problem
 	for _, pr := range probs {
-		ws = append(ws, PlanWarning{Feature: names[pr.Feature], Label: pr.Feature, Message: pr.Message,
-			Amount: pr.Amount, HasAmount: pr.HasAmount})
+		if pr.Severity == Warning {
+			ws = append(ws, pr)
+		}
 	}
 	return ws
 }

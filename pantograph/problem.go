@@ -15,16 +15,21 @@ const (
 	Warning Severity = "warning" // the part can be cut, but something will come out weak or odd
 )
 
-// Problem is one thing Check found wrong with a part.
+// Problem is one thing found wrong with a part (by Check) or with a plan (by PlanPart): what
+// is wrong, with which feature, where it was written and, when it has one, how much.
 type Problem struct {
 	Severity Severity
-	Feature  string // the feature's label, e.g. `[[holes]] "ports"`; empty for the whole part
+	Feature  string // the feature's name as plans list it, e.g. "ports"; empty for the whole
+	Label    string // the feature's label, e.g. `[[holes]] "ports"`; empty for the whole
 	Message  string // what is wrong, in a machinist's words
-	// Amount is the size of the trouble in mm (how far outside, how much overlap, how thin),
-	// when HasAmount is true.
+	// Amount is the size of the trouble in mm at the part (how far outside, how much overlap,
+	// how thin, how much material is left), when HasAmount is true.
 	Amount    float64
 	HasAmount bool
 	Where     Where
+	// Stops is true for a plan's problem that no acceptance gets round: the template does not
+	// fit the copy table, the ratio cannot be set.
+	Stops bool
 }
 
 // Error formats the problem the way a compiler would: place, severity, feature, message.
@@ -33,10 +38,18 @@ func (p Problem) Error() string {
 	if w := p.Where.String(); w != "" {
 		s = w + ": " + s
 	}
-	if p.Feature != "" {
-		s += p.Feature + ": "
+	if p.Label != "" {
+		s += p.Label + ": "
 	}
 	return s + p.Message
+}
+
+// String gives the feature's label and the message, as lists of warnings print them.
+func (p Problem) String() string {
+	if p.Label == "" {
+		return p.Message
+	}
+	return p.Label + ": " + p.Message
 }
 
 // HasErrors reports whether any problem is an error.
@@ -51,8 +64,8 @@ func HasErrors(ps []Problem) bool {
 
 // problemf builds a problem about feature f without an amount.
 func problemf(sev Severity, f Feature, format string, args ...any) Problem {
-	return Problem{Severity: sev, Feature: f.Label(), Message: fmt.Sprintf(format, args...),
-		Where: f.Where}
+	return Problem{Severity: sev, Feature: featureName(f), Label: f.Label(),
+		Message: fmt.Sprintf(format, args...), Where: f.Where}
 }
 
 // on moves the problem to the line of key in feature f.

@@ -110,11 +110,11 @@ func sortedKinds(m map[Kind]float64) []Kind {
 // machineWarnings checks the plan against the machine: the ratio the linkage can be set to,
 // the tools the machinist owns, and whether the template fits the copy table and the printer.
 // Amounts are in mm at the part.
-func machineWarnings(p Plan, m *Machine) []PlanWarning {
+func machineWarnings(p Plan, m *Machine) []Problem {
 	if m == nil {
 		return nil
 	}
-	var ws []PlanWarning
+	var ws []Problem
 	if w, ok := ratioWarning(p.Setup.Ratio, m.Ratio); ok {
 		ws = append(ws, w)
 	}
@@ -122,12 +122,12 @@ func machineWarnings(p Plan, m *Machine) []PlanWarning {
 	size := p.Bounds.Size()
 	if t := m.CopyTable; t.X > 0 && size.X > t.X+sizeTol || t.Y > 0 && size.Y > t.Y+sizeTol {
 		over := math.Max(size.X-t.X, size.Y-t.Y)
-		ws = append(ws, PlanWarning{Stops: true, Amount: over / p.Setup.Ratio, HasAmount: true,
+		ws = append(ws, Problem{Severity: Warning, Stops: true, Amount: over / p.Setup.Ratio, HasAmount: true,
 			Message: fmt.Sprintf("the template is %s x %s mm but the copy table travels only %s x %s mm: a ratio of about %s:1 or less fits",
 				num(size.X), num(size.Y), num(t.X), num(t.Y), num(fittingRatio(p.Setup.Ratio, size, t)))})
 	}
 	if b := m.Printer.Bed; b.X > 0 && b.Y > 0 && !fits(size, b) {
-		ws = append(ws, PlanWarning{Message: fmt.Sprintf(
+		ws = append(ws, Problem{Severity: Warning, Message: fmt.Sprintf(
 			"the template alone is %s x %s mm, larger than the printer bed (%s x %s mm), and the plate adds margins, fixing slots and a front strip: print it in pieces or cut it from sheet",
 			num(size.X), num(size.Y), num(b.X), num(b.Y))})
 	}
@@ -141,19 +141,19 @@ func fits(size geom.Vec, bed Travel) bool {
 }
 
 // ratioWarning reports a ratio the linkage cannot be set to; it stops the job.
-func ratioWarning(r float64, rr RatioRange) (PlanWarning, bool) {
+func ratioWarning(r float64, rr RatioRange) (Problem, bool) {
 	if rr.Allows(r) {
-		return PlanWarning{}, false
+		return Problem{}, false
 	}
-	return PlanWarning{Stops: true, Message: fmt.Sprintf("the linkage cannot be set to ratio %s: it has %s",
+	return Problem{Severity: Warning, Stops: true, Message: fmt.Sprintf("the linkage cannot be set to ratio %s: it has %s",
 		num(r), rr)}, true
 }
 
 // toolWarnings reports a stylus or cutter the plan uses that the machine file does not list,
 // once for the whole plan. Drills are checked with each holes feature, where a missing drill
 // changes the plan.
-func toolWarnings(p Plan, m *Machine) []PlanWarning {
-	var ws []PlanWarning
+func toolWarnings(p Plan, m *Machine) []Problem {
+	var ws []Problem
 	styli, cutters := map[float64]bool{}, map[float64]bool{}
 	for _, f := range p.Features {
 		if f.Status == StatusLost {
@@ -161,12 +161,12 @@ func toolWarnings(p Plan, m *Machine) []PlanWarning {
 		}
 		if len(m.Styli) > 0 && !styli[f.Stylus] && !ownsStylus(m.Styli, f.Stylus) {
 			styli[f.Stylus] = true
-			ws = append(ws, PlanWarning{Message: fmt.Sprintf(
+			ws = append(ws, Problem{Severity: Warning, Message: fmt.Sprintf(
 				"the plan uses a Ø%s stylus, and the machine file lists none that size", num(f.Stylus))})
 		}
 		if f.Cutter > 0 && len(m.Cutters) > 0 && !cutters[f.Cutter] && !ownsCutter(m.Cutters, f.Cutter) {
 			cutters[f.Cutter] = true
-			ws = append(ws, PlanWarning{Message: fmt.Sprintf(
+			ws = append(ws, Problem{Severity: Warning, Message: fmt.Sprintf(
 				"the plan uses a Ø%s cutter, and the machine file lists none that size", num(f.Cutter))})
 		}
 	}

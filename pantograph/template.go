@@ -24,7 +24,7 @@ type planner struct {
 }
 
 // plan returns the template of one feature with its status and warnings.
-func (pl planner) plan(f Feature) (PlannedFeature, []PlanWarning) {
+func (pl planner) plan(f Feature) (PlannedFeature, []Problem) {
 	pf := PlannedFeature{Name: featureName(f), Label: f.Label(), Kind: f.Kind, Depth: f.Depth,
 		TemplateBounds: geom.EmptyBox()}
 	switch f.Kind {
@@ -80,10 +80,10 @@ func (pl planner) stylusFor(cutter float64) (float64, Tip) {
 
 // traced plans a feature whose edges the stylus follows: the profile (inside == false, the
 // stylus runs outside it) or openings and recesses (inside, the stylus runs within).
-func (pl planner) traced(pf PlannedFeature, rs []geom.Region, inside bool) (PlannedFeature, []PlanWarning) {
+func (pl planner) traced(pf PlannedFeature, rs []geom.Region, inside bool) (PlannedFeature, []Problem) {
 	pf = pl.tools(pf, pl.setup.CutterFor(pf.Kind))
 	pf.Method = Traced
-	var ws []PlanWarning
+	var ws []Problem
 	if inside {
 		pf.Status, ws = openingFit(pf, rs, pf.Cutter)
 	} else {
@@ -130,9 +130,9 @@ func (pl planner) traced(pf PlannedFeature, rs []geom.Region, inside bool) (Plan
 // opening) is missing from the template altogether: the stylus rides past and the cutter takes
 // it away. The stylus path the template gives is compared with the cutter path scaled by R;
 // any difference in area is reported, with the corner radius |δ|/R as the amount.
-func (pl planner) oversizeLoss(pf PlannedFeature, rs []geom.Region, inside bool) (PlanWarning, bool) {
+func (pl planner) oversizeLoss(pf PlannedFeature, rs []geom.Region, inside bool) (Problem, bool) {
 	if pf.Compensation >= -sizeTol {
-		return PlanWarning{}, false
+		return Problem{}, false
 	}
 	side := 1.0 // the stylus runs outside a profile
 	if inside {
@@ -152,7 +152,7 @@ func (pl planner) oversizeLoss(pf PlannedFeature, rs []geom.Region, inside bool)
 	r2 := pl.setup.Ratio * pl.setup.Ratio
 	lost := math.Abs(want-got) / r2 // mm² at the part
 	if lost <= oversizeAreaTol*math.Max(1, want/r2) {
-		return PlanWarning{}, false
+		return Problem{}, false
 	}
 	radius := -pf.Compensation / pl.setup.Ratio
 	return amountWarn(pf, radius, "the stylus Ø%s is larger than the matched Ø%s, so sharp corners of the material come out rounded to R%s at the part and details narrower than %s are cut away (%s mm² of the part differ); use a stylus nearer Ø%s",
@@ -174,7 +174,7 @@ func regionsArea(rs []geom.Region) float64 {
 }
 
 // holes plans a holes feature: seats for a drill, or traced openings when the holes are milled.
-func (pl planner) holes(pf PlannedFeature, f Feature) (PlannedFeature, []PlanWarning) {
+func (pl planner) holes(pf PlannedFeature, f Feature) (PlannedFeature, []Problem) {
 	cutter := pl.setup.CutterFor(KindHoles)
 	drill, haveDrill := pl.drillFor(f.Diameter)
 	larger := f.Diameter > cutter+sizeTol
@@ -200,7 +200,7 @@ func (pl planner) holes(pf PlannedFeature, f Feature) (PlannedFeature, []PlanWar
 		pf.Seats = append(pf.Seats, s)
 		pf.TemplateBounds = pf.TemplateBounds.Union(geom.Box{Min: s, Max: s}.Expand(pf.Stylus / 2))
 	}
-	var ws []PlanWarning
+	var ws []Problem
 	if !haveDrill {
 		w := warnf(pf, "no drill of Ø%s at hand", num(f.Diameter))
 		if drill > 0 {
@@ -228,7 +228,7 @@ func (pl planner) drillFor(d float64) (float64, bool) {
 
 // groove plans an engraved line: its centreline on the template, in a channel as wide as the
 // stylus. A groove drawn wider or narrower than the cutter comes out the cutter's width.
-func (pl planner) groove(pf PlannedFeature, f Feature) (PlannedFeature, []PlanWarning) {
+func (pl planner) groove(pf PlannedFeature, f Feature) (PlannedFeature, []Problem) {
 	pf = pl.tools(pf, pl.setup.CutterFor(KindGroove))
 	pf.Compensation, pf.Method, pf.Status = 0, Engraved, StatusOK
 	pf.Width = pf.Stylus
@@ -241,7 +241,7 @@ func (pl planner) groove(pf PlannedFeature, f Feature) (PlannedFeature, []PlanWa
 	pf.TemplateBounds = pf.TemplateBounds.Expand(pf.Width / 2)
 	if f.Width > 0 && math.Abs(f.Width-pf.Cutter) > sizeTol {
 		pf.Status = StatusDeviates
-		return pf, []PlanWarning{amountWarn(pf, math.Abs(f.Width-pf.Cutter),
+		return pf, []Problem{amountWarn(pf, math.Abs(f.Width-pf.Cutter),
 			"drawn %s wide, but the Ø%s cutter engraves it %s wide", mm(f.Width), num(pf.Cutter), mm(pf.Cutter))}
 	}
 	return pf, nil

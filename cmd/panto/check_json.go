@@ -80,7 +80,7 @@ func writeJSON(w io.Writer, p pantograph.Part, s pantograph.Summary) error {
 		out.Features = append(out.Features, featureJSON{f.Name, string(f.Kind), f.Count})
 	}
 	for _, pr := range s.Problems {
-		pj := problemJSON{Severity: string(pr.Severity), Feature: pr.Feature, Message: pr.Message,
+		pj := problemJSON{Severity: string(pr.Severity), Feature: pr.Label, Message: pr.Message,
 			Line: pr.Where.Line}
 		if pr.HasAmount {
 			pj.Amount = roundPtr(pr.Amount)

@@ -279,7 +279,7 @@ func stepText(p pantograph.Plan, st pantograph.Step) string {
 }
 
 // amountText is a warning's amount at the part, when it has one.
-func amountText(w pantograph.PlanWarning) string {
+func amountText(w pantograph.Problem) string {
 	if !w.HasAmount {
 		return ""
 	}

@@ -143,7 +143,7 @@ func writeProblems(w io.Writer, ps []pantograph.Problem) {
 		if p.Where.Line > 0 {
 			line = fmt.Sprintf("line %d: ", p.Where.Line)
 		}
-		fmt.Fprintf(w, "    %s%s: %s: %s\n", line, p.Severity, p.Feature, p.Message)
+		fmt.Fprintf(w, "    %s%s: %s: %s\n", line, p.Severity, p.Label, p.Message)
 	}
 }
 

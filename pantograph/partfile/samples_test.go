@@ -51,7 +51,7 @@ func TestReadIssueExample(t *testing.T) {
 	ps := pantograph.Check(p, pantograph.DefaultOptions())
 	var slotWindow bool
 	for _, pr := range ps {
-		if pr.Severity == pantograph.Error && pr.Feature == `[[slot]] "adjuster"` && math.Abs(pr.Amount-0.9) < 1e-6 {
+		if pr.Severity == pantograph.Error && pr.Label == `[[slot]] "adjuster"` && math.Abs(pr.Amount-0.9) < 1e-6 {
 			slotWindow = true
 		}
 	}
