@@ -83,15 +83,11 @@ func (mo makeFlags) plateOptions() (pantograph.PlateOptions, error) {
 		return p, fmt.Errorf("--style must be wall or groove, got %q", mo.style)
 	case !(mo.fixingSpacing >= 0):
 		return p, fmt.Errorf("--fixing-spacing must be 0 (a slot at each corner) or more, got %g", mo.fixingSpacing)
-	case !(mo.kerf >= 0 && mo.kerf < maxKerf):
-		return p, fmt.Errorf("--kerf must be 0 or more and less than %g mm, got %g", float64(maxKerf), mo.kerf)
+	case !(mo.kerf >= 0 && mo.kerf < pantograph.MaxKerf):
+		return p, fmt.Errorf("--kerf must be 0 or more and less than %g mm, got %g", pantograph.MaxKerf, mo.kerf)
 	}
 	return p, nil
 }
-
-// maxKerf bounds --kerf: a CO2 laser cuts about 0.1 to 0.3 mm wide and a small router bit is a
-// few mm, so 10 mm or more is a slip of the keyboard (common practice, no source).
-const maxKerf = 10
 
 // makeAll reads, plans, and writes every file; nothing is written unless all could be made.
 func makeAll(path string, setup pantograph.Setup, o planFlags, mo makeFlags,

@@ -34,10 +34,11 @@ func dxfWriter(j makeJob, report io.Writer) ([]sheetFile, error) {
 // plate: template.dxf (outline, openings, seats, grooves and labels on their own layers, in
 // template mm, the laser kerf compensated when kerf > 0) and part.dxf (the part at true size).
 func makeDXFFiles(part pantograph.Part, p pantograph.Plan, kerf float64) ([]sheetFile, error) {
-	tmpl, err := dxf.TemplateDrawing(p, kerf)
+	ct, err := pantograph.TemplateForCutting(p, kerf)
 	if err != nil {
-		return nil, err
+		return nil, fmt.Errorf("template.dxf: %w", err)
 	}
+	tmpl := dxf.TemplateDrawing(ct)
 	return encodeFiles([]fileEncoder{
 		{"template.dxf", func(b *bytes.Buffer) error { return dxf.Encode(b, tmpl) }},
 		{"part.dxf", func(b *bytes.Buffer) error { return dxf.Encode(b, dxf.PartDrawing(part)) }},

@@ -202,7 +202,7 @@ func TestMakeKerfUsage(t *testing.T) {
 		{"not a number", "wide", exitUsage, "--kerf"},
 		{"too wide", "10", exitUsage, "less than 10 mm"},
 		// derived: a 6 mm kerf takes 3 mm off the radius of the 2.5 mm seats.
-		{"closes the seats", "6", exitFailed, "closes the 5 mm seats"},
+		{"closes the seats", "6", exitFailed, "closes the Ø5 seats"},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {

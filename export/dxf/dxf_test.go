@@ -140,46 +140,49 @@ func TestTemplateDrawing(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	plain, err := TemplateDrawing(plan, 0)
+	ct, err := pantograph.TemplateForCutting(plan, 0.2)
 	if err != nil {
 		t.Fatal(err)
 	}
-	kerfed, err := TemplateDrawing(plan, 0.2)
-	if err != nil {
-		t.Fatal(err)
-	}
-	outline := func(d Drawing, layer string) float64 {
-		var a float64
+	d := TemplateDrawing(ct)
+	count := func(layer string) (n int, area float64) {
 		for _, o := range d.Outlines {
 			if o.Layer == layer {
-				a += math.Abs(o.Contour.Area())
+				n++
+				area += o.Contour.Area()
 			}
 		}
-		return a
+		return n, area
 	}
-	// The outline grows and openings shrink by kerf/2 = 0.1 mm: the area changes by about
-	// 0.1 × perimeter (derived: the first-order change of an offset's area).
-	var per float64
-	for _, o := range plain.Outlines {
-		if o.Layer == LayerOutline {
-			per += o.Contour.Perimeter()
+	// Every contour the planner gave is written on its layer, with its area (holes negative).
+	for _, tc := range []struct {
+		layer string
+		rs    []geom.Region
+	}{{LayerOutline, ct.Outline}, {LayerOpenings, ct.Openings}} {
+		var n int
+		var area float64
+		for _, r := range tc.rs {
+			for _, c := range r.Contours() {
+				n++
+				area += c.Area()
+			}
+		}
+		gotN, gotArea := count(tc.layer)
+		if gotN != n {
+			t.Errorf("%s: got %d outlines, want %d", tc.layer, gotN, n)
+		}
+		approx(t, tc.layer+" area", gotArea, area, 1e-9)
+	}
+	if len(d.Circles) != len(ct.Seats) || len(ct.Seats) != 5 { // the sample's five drilled holes
+		t.Errorf("got %d circles for %d seats, want 5", len(d.Circles), len(ct.Seats))
+	}
+	for i, c := range d.Circles {
+		if c.Layer != LayerSeats || c.Center != ct.Seats[i].At || c.Radius != ct.Seats[i].Radius {
+			t.Errorf("circle %d: got %+v, want seat %+v", i, c, ct.Seats[i])
 		}
 	}
-	approx(t, "outline growth", outline(kerfed, LayerOutline)-outline(plain, LayerOutline), 0.1*per, 0.01*per)
-	if outline(kerfed, LayerOpenings) >= outline(plain, LayerOpenings) {
-		t.Errorf("openings did not shrink under kerf: %g, then %g", outline(plain, LayerOpenings), outline(kerfed, LayerOpenings))
-	}
-	seats := 0
-	for _, c := range plain.Circles {
-		if c.Layer == LayerSeats {
-			seats++
-			approx(t, "seat radius", c.Radius, 1.5, 1e-12) // the 3 mm stylus
-		}
-	}
-	if seats != 5 { // the sample's five drilled holes
-		t.Errorf("got %d seats, want 5", seats)
-	}
-	if _, err := TemplateDrawing(plan, 3.5); err == nil {
-		t.Errorf("a kerf wider than the seats: got no error")
+	if len(d.Texts) != len(ct.Labels) || len(d.Polylines) != len(ct.Grooves) {
+		t.Errorf("got %d texts and %d polylines, want %d labels and %d grooves",
+			len(d.Texts), len(d.Polylines), len(ct.Labels), len(ct.Grooves))
 	}
 }

@@ -1,7 +1,6 @@
 package dxf
 
 import (
-	"fmt"
 	"math"
 
 	"panto/geom"
@@ -83,60 +82,27 @@ const (
 // arm's length and is cut cleanly by a laser (common practice, no source).
 const templateLabelHeight = 3.0
 
-// TemplateDrawing returns the template of a plan in the template frame (mm on the copy table):
-// the outline, the openings the stylus traces inside, a seat for every drilled hole (a circle
-// of the stylus's diameter), groove centrelines and a numbered label per feature, each on its
-// own layer. A laser cuts kerf wide centred on the line, so kerf > 0 moves the outline out by
-// kerf/2 and openings and seats in by kerf/2, so that the parts cut come out at the template's
-// size. It fails when the kerf closes an opening or a seat.
-func TemplateDrawing(pl pantograph.Plan, kerf float64) (Drawing, error) {
-	if kerf < 0 || math.IsNaN(kerf) || math.IsInf(kerf, 0) {
-		return Drawing{}, fmt.Errorf("dxf: kerf must be 0 or more, got %g", kerf)
-	}
+// TemplateDrawing returns the template for cutting on a laser or router, as the planner made it
+// (pantograph.TemplateForCutting, which allows for the kerf): the outline, the openings the
+// stylus traces inside, the seats, the groove centrelines and a numbered label per feature,
+// each on its own layer, in template mm.
+func TemplateDrawing(ct pantograph.CutTemplate) Drawing {
 	d := Drawing{Layers: []Layer{{LayerOutline, 7}, {LayerOpenings, 1}, {LayerSeats, 3},
 		{LayerGrooves, 6}, {LayerLabels, 8}}}
-	for _, f := range pl.Features {
-		if err := d.templateFeature(f, kerf/2); err != nil {
-			return Drawing{}, fmt.Errorf("dxf: %s: %w", f.Label, err)
-		}
-		if box := f.TemplateBounds; !box.IsEmpty() && f.Status != pantograph.StatusLost {
-			d.Texts = append(d.Texts, Text{Layer: LayerLabels, At: box.Center(), Height: templateLabelHeight,
-				Value: fmt.Sprintf("%d %s", f.Number, f.Name)})
-		}
+	for _, r := range ct.Outline {
+		d.region(LayerOutline, r)
 	}
-	return d, nil
-}
-
-func (d *Drawing) templateFeature(f pantograph.PlannedFeature, half float64) error {
-	switch {
-	case f.Kind == pantograph.KindProfile:
-		return d.offsetRegions(LayerOutline, f.TemplateRegions, half)
-	case len(f.Seats) > 0:
-		r := f.Stylus/2 - half
-		if !(r > 0) {
-			return fmt.Errorf("the kerf (%g mm) closes the %g mm seats", 2*half, f.Stylus)
-		}
-		for _, s := range f.Seats {
-			d.Circles = append(d.Circles, Circle{Layer: LayerSeats, Center: s, Radius: r})
-		}
-	case len(f.Path) > 0:
-		d.Polylines = append(d.Polylines, Polyline{Layer: LayerGrooves, Points: f.Path})
-	default:
-		return d.offsetRegions(LayerOpenings, f.TemplateRegions, -half)
+	for _, r := range ct.Openings {
+		d.region(LayerOpenings, r)
 	}
-	return nil
-}
-
-// offsetRegions adds the regions moved by by (outward when positive) to layer.
-func (d *Drawing) offsetRegions(layer string, rs []geom.Region, by float64) error {
-	for _, r := range rs {
-		res := r.Offset(by)
-		if len(res.Regions) == 0 || len(res.Vanished) > 0 {
-			return fmt.Errorf("the kerf (%g mm) closes an opening", 2*math.Abs(by))
-		}
-		for _, o := range res.Regions {
-			d.region(layer, o)
-		}
+	for _, s := range ct.Seats {
+		d.Circles = append(d.Circles, Circle{Layer: LayerSeats, Center: s.At, Radius: s.Radius})
 	}
-	return nil
+	for _, g := range ct.Grooves {
+		d.Polylines = append(d.Polylines, Polyline{Layer: LayerGrooves, Points: g})
+	}
+	for _, l := range ct.Labels {
+		d.Texts = append(d.Texts, Text{Layer: LayerLabels, At: l.At, Height: templateLabelHeight, Value: l.Text})
+	}
+	return d
 }

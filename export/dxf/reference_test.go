@@ -157,10 +157,11 @@ func TestReferenceEzdxfOpensTemplate(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := TemplateDrawing(plan, 0.2)
+	ct, err := pantograph.TemplateForCutting(plan, 0.2)
 	if err != nil {
 		t.Fatal(err)
 	}
+	d := TemplateDrawing(ct)
 	r := auditWithEzdxf(t, d)
 	if r.Errors != 0 || r.Fixes != 0 {
 		t.Errorf("ezdxf audit: got %d errors and %d fixes, want none", r.Errors, r.Fixes)
