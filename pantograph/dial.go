@@ -122,9 +122,9 @@ type Move struct {
 	BackTo   float64 // where to wind back to first, when Reversal
 }
 
-// Approach returns the moves that bring the dial to each count in turn, starting at from, every
+// approach returns the moves that bring the dial to each count in turn, starting at from, every
 // one ending on a forward (counting-up) motion so that backlash is taken up the same way.
-func (d Dial) Approach(from float64, counts []float64) []Move {
+func (d Dial) approach(from float64, counts []float64) []Move {
 	out := make([]Move, len(counts))
 	at := from
 	tol := divisionSnap * d.Division()

@@ -35,7 +35,7 @@ func TestApproachProperty(t *testing.T) {
 			counts[k] = math.Round(rng.Float64()*100*50) / 50
 		}
 		at := 0.0
-		for k, m := range d.Approach(at, counts) {
+		for k, m := range d.approach(at, counts) {
 			switch {
 			case m.Reversal != (m.Target < at):
 				t.Fatalf("seed %d, route %d, move %d: reversal %v from %v to %v", seed, i, k, m.Reversal, at, m.Target)
@@ -56,7 +56,7 @@ func TestPecksProperty(t *testing.T) {
 	rng := rand.New(rand.NewSource(seed))
 	for i := 0; i < 500; i++ {
 		d, total := 0.1+rng.Float64()*3, 0.05+rng.Float64()*10
-		ps := Pecks(total, d)
+		ps := pecks(total, d)
 		first := peckShare * d
 		if d < microTool {
 			first = microFirstShare * d

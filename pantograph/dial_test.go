@@ -119,7 +119,7 @@ func TestBackOff(t *testing.T) {
 // move that comes back is a reversal, and it winds back a quarter turn below its target.
 func TestApproachReversal(t *testing.T) {
 	d := Dial{Pitch: 2, Divisions: 100, Backlash: 0.05}
-	got := d.Approach(0, []float64{5, 3, 8, 8, 1, 0.51})
+	got := d.approach(0, []float64{5, 3, 8, 8, 1, 0.51})
 	want := []Move{ // derived: back-off 0.5 mm (quarter turn), see TestBackOff
 		{Target: 5},
 		{Target: 3, Reversal: true, BackTo: 2.5},

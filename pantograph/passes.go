@@ -63,10 +63,10 @@ const engraveStep = 0.05
 // memory).
 const minStep = 0.01
 
-// MillPassRule returns the step-down for milling or engraving material with a tool of kind
+// millPassRule returns the step-down for milling or engraving material with a tool of kind
 // and diameter d mm.
-func MillPassRule(kind ToolKind, d float64, material string) PassRule {
-	g, _ := MaterialGroup(material)
+func millPassRule(kind ToolKind, d float64, material string) PassRule {
+	g, _ := materialGroup(material)
 	if kind == ToolEngrave {
 		return PassRule{engraveStep, fmt.Sprintf("engraver: %.2f mm per pass (common practice, from memory)", engraveStep)}
 	}
@@ -88,21 +88,21 @@ const breakThroughMill = 0.05
 // (D/2)/tan(59°) = 0.300·D (derived).
 const drillPointShare = 0.3004
 
-// BreakThrough returns how far past the stock a through cut with a tool of kind and diameter d
+// breakThrough returns how far past the stock a through cut with a tool of kind and diameter d
 // must go: for a drill its point length plus the milling allowance, so the full diameter
 // comes through; for a cutter the allowance alone.
-func BreakThrough(kind ToolKind, d float64) float64 {
+func breakThrough(kind ToolKind, d float64) float64 {
 	if kind == ToolDrill {
 		return drillPointShare*d + breakThroughMill
 	}
 	return breakThroughMill
 }
 
-// TotalDepth returns how deep the tool goes for a feature of depth dep in stock thick mm: the
+// totalDepth returns how deep the tool goes for a feature of depth dep in stock thick mm: the
 // depth itself, or through the stock plus the break-through allowance.
-func TotalDepth(dep Depth, thick float64, kind ToolKind, d float64) float64 {
+func totalDepth(dep Depth, thick float64, kind ToolKind, d float64) float64 {
 	if dep.Through {
-		return thick + BreakThrough(kind, d)
+		return thick + breakThrough(kind, d)
 	}
 	return dep.MM
 }
@@ -131,16 +131,16 @@ const (
 	microPeckShare  = 0.25
 )
 
-// PeckRule describes the peck schedule for a drill of d mm, with its source.
-func PeckRule(d float64) string {
+// peckRule describes the peck schedule for a drill of d mm, with its source.
+func peckRule(d float64) string {
 	if d < microTool {
 		return fmt.Sprintf("micro drill: first peck %g × D, then %g × D, clear chips each time, no dwell at the bottom (tooling tech tips; micro values from memory)", microFirstShare, microPeckShare)
 	}
 	return fmt.Sprintf("peck %g × D, clear chips each time (tooling tech tips: 2–3 D, low end)", peckShare)
 }
 
-// Pecks returns the depth at the bottom of each peck of a drill of d mm down to total mm.
-func Pecks(total, d float64) []float64 {
+// pecks returns the depth at the bottom of each peck of a drill of d mm down to total mm.
+func pecks(total, d float64) []float64 {
 	if !(total > 0) || !(d > 0) {
 		return nil
 	}

@@ -46,7 +46,7 @@ func TestPecks(t *testing.T) {
 		{"ordinary deep", 7, 1.6, []float64{3.2, 6.4, 7}}, // derived
 	}
 	for _, tc := range tests {
-		t.Run(tc.name, func(t *testing.T) { approxSlice(t, Pecks(tc.total, tc.d), tc.want, 1e-12) })
+		t.Run(tc.name, func(t *testing.T) { approxSlice(t, pecks(tc.total, tc.d), tc.want, 1e-12) })
 	}
 }
 
@@ -65,7 +65,7 @@ func TestTotalDepth(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			if got := TotalDepth(tc.dep, 1.2, tc.kind, tc.d); math.Abs(got-tc.want) > 1e-4 {
+			if got := totalDepth(tc.dep, 1.2, tc.kind, tc.d); math.Abs(got-tc.want) > 1e-4 {
 				t.Errorf("got %v, want %v", got, tc.want)
 			}
 		})
@@ -88,7 +88,7 @@ func TestMillPassRule(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			r := MillPassRule(tc.kind, tc.d, tc.material)
+			r := millPassRule(tc.kind, tc.d, tc.material)
 			if math.Abs(r.StepDown-tc.want) > 1e-12 || r.Rule == "" {
 				t.Errorf("got %v (%q), want %v", r.StepDown, r.Rule, tc.want)
 			}

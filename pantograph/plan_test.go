@@ -39,7 +39,7 @@ func TestOrderOfWork(t *testing.T) {
 	// datum the shortest open route goes to (80, 20) or (20, 80) first (√(80² + 20²) =
 	// 82.462), then 60 and 60 along the sides.
 	small := planned(t, p, "small")
-	if l := RouteLength(geom.V(0, 0), small.Seats, []int{0, 1, 2}); !near(l, 82.46211251235321+120, 1e-9) {
+	if l := routeLength(geom.V(0, 0), small.Seats, []int{0, 1, 2}); !near(l, 82.46211251235321+120, 1e-9) {
 		t.Errorf("small seats %v: route %v long, want 202.462", small.Seats, l)
 	}
 }

@@ -22,8 +22,8 @@ const maxTwoOptRounds = 1000
 // distance a dial reads, and above the rounding in a sum of a few lengths.
 const twoOptGain = 1e-9
 
-// Route returns the indices of pts in a short order to visit them starting from start.
-func Route(start geom.Vec, pts []geom.Vec) []int {
+// route returns the indices of pts in a short order to visit them starting from start.
+func route(start geom.Vec, pts []geom.Vec) []int {
 	if len(pts) == 0 {
 		return nil
 	}
@@ -33,14 +33,14 @@ func Route(start geom.Vec, pts []geom.Vec) []int {
 	}
 	a := twoOpt(start, pts, nearestNeighbour(start, pts))
 	b := twoOpt(start, pts, given)
-	if RouteLength(start, pts, b) < RouteLength(start, pts, a) {
+	if routeLength(start, pts, b) < routeLength(start, pts, a) {
 		return b
 	}
 	return a
 }
 
-// RouteLength returns the length of the open path from start through pts in the given order.
-func RouteLength(start geom.Vec, pts []geom.Vec, order []int) float64 {
+// routeLength returns the length of the open path from start through pts in the given order.
+func routeLength(start geom.Vec, pts []geom.Vec, order []int) float64 {
 	l, at := 0.0, start
 	for _, i := range order {
 		l += at.Dist(pts[i])
@@ -187,7 +187,7 @@ func (p *Plan) drillSteps(d float64, at geom.Vec) geom.Vec {
 			p.Features[i].Seats = nil
 		}
 	}
-	for _, k := range Route(at, pts) {
+	for _, k := range route(at, pts) {
 		i, last := owner[k], len(p.Steps)-1
 		if p.Steps[last].What != StepDrill || p.Steps[last].Feature != i {
 			p.Steps = append(p.Steps, Step{What: StepDrill, Feature: i, Drill: d})

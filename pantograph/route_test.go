@@ -20,7 +20,7 @@ func bruteRoute(start geom.Vec, pts []geom.Vec) float64 {
 	var permute func(k int)
 	permute = func(k int) {
 		if k == len(idx) {
-			best = math.Min(best, RouteLength(start, pts, idx))
+			best = math.Min(best, routeLength(start, pts, idx))
 			return
 		}
 		for i := k; i < len(idx); i++ {
@@ -73,7 +73,7 @@ func TestRouteKnownOptimum(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			got := RouteLength(tc.start, tc.pts, Route(tc.start, tc.pts))
+			got := routeLength(tc.start, tc.pts, route(tc.start, tc.pts))
 			if !near(got, tc.want, 1e-9) {
 				t.Fatalf("got %v, want %v", got, tc.want)
 			}
@@ -102,12 +102,12 @@ func TestRouteNeverLongerThanGiven(t *testing.T) {
 		for i := range given {
 			given[i] = i
 		}
-		order := Route(start, pts)
+		order := route(start, pts)
 		sorted := slices.Sorted(slices.Values(order))
 		if !slices.Equal(sorted, given) {
 			t.Fatalf("seed %d: route %v is not a permutation of 0..%d", seed, order, n-1)
 		}
-		got, was := RouteLength(start, pts, order), RouteLength(start, pts, given)
+		got, was := routeLength(start, pts, order), routeLength(start, pts, given)
 		if got > was+1e-9 {
 			t.Fatalf("seed %d: route %v long, the given order %v", seed, got, was)
 		}
@@ -120,10 +120,10 @@ func TestRouteNeverLongerThanGiven(t *testing.T) {
 }
 
 func TestRouteEmptyAndOne(t *testing.T) {
-	if got := Route(geom.V(0, 0), nil); len(got) != 0 {
+	if got := route(geom.V(0, 0), nil); len(got) != 0 {
 		t.Fatalf("got %v, want no route", got)
 	}
-	if got := Route(geom.V(0, 0), []geom.Vec{geom.V(1, 1)}); !slices.Equal(got, []int{0}) {
+	if got := route(geom.V(0, 0), []geom.Vec{geom.V(1, 1)}); !slices.Equal(got, []int{0}) {
 		t.Fatalf("got %v, want [0]", got)
 	}
 }
@@ -135,6 +135,6 @@ func BenchmarkRoute200(b *testing.B) {
 		pts[i] = randVec(rng, 100)
 	}
 	for b.Loop() {
-		Route(geom.V(0, 0), pts)
+		route(geom.V(0, 0), pts)
 	}
 }

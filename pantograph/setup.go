@@ -64,8 +64,8 @@ func (s Setup) Validate() error {
 	return nil
 }
 
-// CutterFor returns the cutter diameter, in mm, used on features of kind k.
-func (s Setup) CutterFor(k Kind) float64 {
+// cutterFor returns the cutter diameter, in mm, used on features of kind k.
+func (s Setup) cutterFor(k Kind) float64 {
 	if d, ok := s.Cutters[k]; ok {
 		return d
 	}

@@ -42,7 +42,7 @@ func (b sheetBuilder) drillRows(st Step) []SheetRow {
 	if d == 0 {
 		d = f.Drill
 	}
-	total := b.settable(TotalDepth(f.Depth, b.p.Stock.Thickness, ToolDrill, d), f.Depth.Through)
+	total := b.settable(totalDepth(f.Depth, b.p.Stock.Thickness, ToolDrill, d), f.Depth.Through)
 	seats := st.Seats
 	if len(seats) == 0 {
 		seats = f.Seats
@@ -53,7 +53,7 @@ func (b sheetBuilder) drillRows(st Step) []SheetRow {
 			Stylus: stylusText(f), Where: b.at(seat), Depth: total, Through: f.Depth.Through,
 			Action: fmt.Sprintf("drill hole %d of %d", i+1, len(seats))}
 		if i == 0 {
-			r.Passes, r.PassRule = passes(Pecks(total, d)), PeckRule(d)
+			r.Passes, r.PassRule = passes(pecks(total, d)), peckRule(d)
 		} else {
 			r.PassRule = "pecks as hole 1"
 		}
@@ -77,8 +77,8 @@ func (b sheetBuilder) traceRow(st Step) SheetRow {
 	if f.Kind == KindProfile || f.Kind == KindCutout {
 		dep = Depth{Through: true}
 	}
-	total := b.settable(TotalDepth(dep, b.p.Stock.Thickness, kind, f.Cutter), dep.Through)
-	rule := MillPassRule(kind, f.Cutter, b.p.Stock.Material)
+	total := b.settable(totalDepth(dep, b.p.Stock.Thickness, kind, f.Cutter), dep.Through)
+	rule := millPassRule(kind, f.Cutter, b.p.Stock.Material)
 	r := SheetRow{Number: f.Number, Feature: f.Name, What: st.What, Tool: b.toolText(f),
 		Stylus: stylusText(f), Where: b.at(startOf(f)), Depth: total, Through: dep.Through, Action: action,
 		Passes: passes(Passes(total, rule.StepDown)), PassRule: rule.Rule}
@@ -124,13 +124,13 @@ func (b sheetBuilder) speed(r *SheetRow, d float64, kind ToolKind) {
 	if !(d > 0) {
 		return
 	}
-	sp := SpeedFor(b.m.Spindle, b.p.Stock.Material, b.toolMaterial(d, kind), d, kind)
+	sp := speedFor(b.m.Spindle, b.p.Stock.Material, b.toolMaterial(d, kind), d, kind)
 	r.RPM, r.SpeedNote = sp.RPM, sp.Note
 	flutes := 0
 	if c, ok := b.cutter(d); ok && kind != ToolDrill {
 		flutes = c.Flutes
 	}
-	if feed, rule, ok := FeedGuide(d, sp.RPM, flutes, kind); ok {
+	if feed, rule, ok := feedGuide(d, sp.RPM, flutes, kind); ok {
 		r.Feed, r.FeedRule = feed, rule
 	}
 }
@@ -183,7 +183,7 @@ func (b sheetBuilder) readAxis(a axis, rows []SheetRow) DialInfo {
 	for i := range counts {
 		counts[i] += shift
 	}
-	moves := a.dial.Approach(shift, counts)
+	moves := a.dial.approach(shift, counts)
 	for i, r := range rows {
 		a.set(r.Where, a.dial.Read(counts[i], a.scale))
 		if moves[i].Reversal {
@@ -252,7 +252,7 @@ func (b sheetBuilder) notes() []string {
 		"Speeds: " + SpeedSource + ".",
 		"Through cuts go past the stock by a break-through allowance: 0.05 mm for cutters, plus the point length (0.3 × D, derived from a 118° point) for drills.",
 	}
-	if g, ok := MaterialGroup(b.p.Stock.Material); !ok {
+	if g, ok := materialGroup(b.p.Stock.Material); !ok {
 		out = append(out, fmt.Sprintf("The material %q is not in the speed table; the slowest row (%s) was used.", b.p.Stock.Material, g))
 	}
 	return out

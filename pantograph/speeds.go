@@ -56,10 +56,10 @@ func materialWords() []struct{ word, group string } {
 	}
 }
 
-// MaterialGroup returns the speed-table group for a stock material and whether it was
+// materialGroup returns the speed-table group for a stock material and whether it was
 // recognised. An unknown material is treated as tool steel, the slowest in the table, so that
 // a guess never runs a tool too fast.
-func MaterialGroup(material string) (string, bool) {
+func materialGroup(material string) (string, bool) {
 	m := strings.ToLower(material)
 	for _, w := range materialWords() {
 		if strings.Contains(m, w.word) {
@@ -69,10 +69,10 @@ func MaterialGroup(material string) (string, bool) {
 	return groupTool, false
 }
 
-// SurfaceSpeed returns v_c in m/min for a tool of kind and toolMaterial ("hss" or "carbide";
+// surfaceSpeed returns v_c in m/min for a tool of kind and toolMaterial ("hss" or "carbide";
 // anything else counts as HSS) cutting a stock material. Engravers run at milling speeds.
-func SurfaceSpeed(material, toolMaterial string, kind ToolKind) float64 {
-	g, _ := MaterialGroup(material)
+func surfaceSpeed(material, toolMaterial string, kind ToolKind) float64 {
+	g, _ := materialGroup(material)
 	vd, vm := hssSpeed(g)
 	v := vm
 	if kind == ToolDrill {
@@ -96,14 +96,14 @@ type Speed struct {
 	Note         string // why RPM differs from Wanted, or that the material was guessed
 }
 
-// SpeedFor returns the spindle speed for a tool of kind, diameter d mm and toolMaterial cutting
+// speedFor returns the spindle speed for a tool of kind, diameter d mm and toolMaterial cutting
 // material on spindle s.
-func SpeedFor(s Spindle, material, toolMaterial string, d float64, kind ToolKind) Speed {
-	vc := SurfaceSpeed(material, toolMaterial, kind)
+func speedFor(s Spindle, material, toolMaterial string, d float64, kind ToolKind) Speed {
+	vc := surfaceSpeed(material, toolMaterial, kind)
 	sp := Speed{SurfaceSpeed: vc, Wanted: RPM(vc, d)}
 	sp.RPM = sp.Wanted
 	var notes []string
-	if _, ok := MaterialGroup(material); !ok {
+	if _, ok := materialGroup(material); !ok {
 		notes = append(notes, fmt.Sprintf("material %q not in the speed table: tool steel speeds used", material))
 	}
 	switch {
@@ -135,9 +135,9 @@ const microDrillFeed = 0.001
 // two-fluted (common practice, no source).
 const defaultFlutes = 2
 
-// FeedGuide returns a feed in mm/min for a micro tool of kind and diameter d mm at rpm, with
+// feedGuide returns a feed in mm/min for a micro tool of kind and diameter d mm at rpm, with
 // the rule it came from, or ok false for a tool that is not micro. flutes 0 means two.
-func FeedGuide(d, rpm float64, flutes int, kind ToolKind) (feed float64, rule string, ok bool) {
+func feedGuide(d, rpm float64, flutes int, kind ToolKind) (feed float64, rule string, ok bool) {
 	if d >= microTool {
 		return 0, "", false
 	}

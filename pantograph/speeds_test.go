@@ -43,7 +43,7 @@ func TestSpeedForCap(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			sp := SpeedFor(tc.s, "brass", "hss", 0.5, ToolMill)
+			sp := speedFor(tc.s, "brass", "hss", 0.5, ToolMill)
 			if math.Abs(sp.RPM-tc.want) > 0.5 || sp.Capped != tc.capped || (sp.Note != "") != tc.hasNote {
 				t.Errorf("got %.1f capped %v note %q, want %v capped %v note %v", sp.RPM, sp.Capped, sp.Note, tc.want, tc.capped, tc.hasNote)
 			}
@@ -67,7 +67,7 @@ func TestSurfaceSpeed(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.material, func(t *testing.T) {
-			if got := SurfaceSpeed(tc.material, tc.tool, tc.kind); got != tc.want {
+			if got := surfaceSpeed(tc.material, tc.tool, tc.kind); got != tc.want {
 				t.Errorf("got %v, want %v", got, tc.want)
 			}
 		})
@@ -76,14 +76,14 @@ func TestSurfaceSpeed(t *testing.T) {
 
 func TestFeedGuide(t *testing.T) {
 	// derived: 0.005 × 0.5 mm = 2.5 µm/tooth × 2 flutes × 15000 rpm = 75 mm/min.
-	if f, _, ok := FeedGuide(0.5, 15000, 0, ToolMill); !ok || math.Abs(f-75) > 1e-9 {
+	if f, _, ok := feedGuide(0.5, 15000, 0, ToolMill); !ok || math.Abs(f-75) > 1e-9 {
 		t.Errorf("end mill: got %v %v, want 75 true", f, ok)
 	}
 	// derived: 1 µm/rev × 15000 rpm = 15 mm/min.
-	if f, _, ok := FeedGuide(0.6, 15000, 0, ToolDrill); !ok || math.Abs(f-15) > 1e-9 {
+	if f, _, ok := feedGuide(0.6, 15000, 0, ToolDrill); !ok || math.Abs(f-15) > 1e-9 {
 		t.Errorf("drill: got %v %v, want 15 true", f, ok)
 	}
-	if _, _, ok := FeedGuide(2, 5000, 2, ToolMill); ok {
+	if _, _, ok := feedGuide(2, 5000, 2, ToolMill); ok {
 		t.Errorf("a 2 mm cutter got a micro feed guide")
 	}
 }

@@ -85,9 +85,6 @@ type StylusChoice struct {
 	Direction    Direction
 }
 
-// Matches reports whether the chosen stylus needs no compensation.
-func (c StylusChoice) Matches() bool { return c.Direction == DirectionNone }
-
 // ChooseStylus picks, from the styli the machine lists, the one whose tracing diameter is
 // nearest to R·d_c, and works out the compensation it needs. Ties go to the larger stylus (it
 // is stiffer and less likely to bend against the template), then to the one listed first. It

@@ -81,7 +81,7 @@ func (pl planner) stylusFor(cutter float64) (float64, Tip) {
 // traced plans a feature whose edges the stylus follows: the profile (inside == false, the
 // stylus runs outside it) or openings and recesses (inside, the stylus runs within).
 func (pl planner) traced(pf PlannedFeature, rs []geom.Region, inside bool) (PlannedFeature, []Problem) {
-	pf = pl.tools(pf, pl.setup.CutterFor(pf.Kind))
+	pf = pl.tools(pf, pl.setup.cutterFor(pf.Kind))
 	pf.Method = Traced
 	var ws []Problem
 	if inside {
@@ -175,7 +175,7 @@ func regionsArea(rs []geom.Region) float64 {
 
 // holes plans a holes feature: seats for a drill, or traced openings when the holes are milled.
 func (pl planner) holes(pf PlannedFeature, f Feature) (PlannedFeature, []Problem) {
-	cutter := pl.setup.CutterFor(KindHoles)
+	cutter := pl.setup.cutterFor(KindHoles)
 	drill, haveDrill := pl.drillFor(f.Diameter)
 	larger := f.Diameter > cutter+sizeTol
 	if larger && (pl.setup.MillHoles || !haveDrill) {
@@ -229,7 +229,7 @@ func (pl planner) drillFor(d float64) (float64, bool) {
 // groove plans an engraved line: its centreline on the template, in a channel as wide as the
 // stylus. A groove drawn wider or narrower than the cutter comes out the cutter's width.
 func (pl planner) groove(pf PlannedFeature, f Feature) (PlannedFeature, []Problem) {
-	pf = pl.tools(pf, pl.setup.CutterFor(KindGroove))
+	pf = pl.tools(pf, pl.setup.cutterFor(KindGroove))
 	pf.Compensation, pf.Method, pf.Status = 0, Engraved, StatusOK
 	pf.Width = pf.Stylus
 	pf.TemplateBounds = geom.EmptyBox()
