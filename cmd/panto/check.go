@@ -1,10 +1,8 @@
 package main
 
 import (
-	"errors"
 	"fmt"
 	"io"
-	"io/fs"
 
 	"github.com/spf13/pflag"
 
@@ -16,36 +14,26 @@ import (
 const defaultMinWall = pantograph.DefaultMinWall
 
 // runCheck is `panto check PART [--json] [--min-wall MM]`.
-func runCheck(args []string, stdout, stderr io.Writer) int {
+func runCheck(args []string, stdout, stderr io.Writer) error {
 	fl := pflag.NewFlagSet("check", pflag.ContinueOnError)
 	fl.SetOutput(io.Discard)
 	asJSON := fl.Bool("json", false, "print the summary as JSON")
 	minWall := fl.Float64("min-wall", defaultMinWall, "warn about walls thinner than this, in mm")
 	help := fl.BoolP("help", "h", false, "show help")
-	if err := fl.Parse(args); err != nil {
-		fmt.Fprintf(stderr, "panto check: %v\nRun 'panto help check' for usage.\n", err)
-		return exitUsage
-	}
-	if *help {
-		return runHelp([]string{"check"}, stdout, stderr)
-	}
-	if fl.NArg() != 1 {
-		fmt.Fprintf(stderr, "panto check: give exactly one part file, got %d\nUsage: panto check PART [--json]\n", fl.NArg())
-		return exitUsage
+	if done, err := parseOne("check", "part file", checkSynopsis, fl, args, help, stdout); done {
+		return err
 	}
 	if !(*minWall >= 0) {
-		fmt.Fprintf(stderr, "panto check: --min-wall must be 0 or more, got %g\n", *minWall)
-		return exitUsage
+		return usagef("check", "--min-wall must be 0 or more, got %g", *minWall)
 	}
 	part, err := partfile.ReadFile(fl.Arg(0))
 	if err != nil {
-		return reportReadError(err, stderr)
+		return badFile("check", "part file", err)
 	}
 	s := pantograph.Summarize(part, pantograph.Options{MinWall: *minWall})
 	if *asJSON {
-		if err := writeJSON(stdout, part, s); err != nil {
-			fmt.Fprintf(stderr, "panto check: %v\n", err)
-			return exitFailed
+		if err := writeCheckJSON(stdout, part, s); err != nil {
+			return err
 		}
 	} else {
 		writeSummary(stdout, part, s)
@@ -54,18 +42,9 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stderr, p.Error())
 	}
 	if pantograph.HasErrors(s.Problems) {
-		return exitUsage
+		return &exitError{code: exitUsage}
 	}
-	return exitOK
+	return nil
 }
 
-// reportReadError explains why the part file could not be read.
-func reportReadError(err error, stderr io.Writer) int {
-	var pe *fs.PathError
-	if errors.As(err, &pe) {
-		fmt.Fprintf(stderr, "panto check: cannot read the part file: %v\n", err)
-		return exitUsage
-	}
-	fmt.Fprintln(stderr, err)
-	return exitUsage
-}
+const checkSynopsis = "panto check PART [--json] [--min-wall MM]"

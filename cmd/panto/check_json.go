@@ -56,8 +56,8 @@ func round(v float64) float64 { return numfmt.JSON(v) }
 
 func roundPtr(v float64) *float64 { r := round(v); return &r }
 
-// writeJSON prints the summary as one indented JSON object.
-func writeJSON(w io.Writer, p pantograph.Part, s pantograph.Summary) error {
+// writeCheckJSON prints the summary as one indented JSON object.
+func writeCheckJSON(w io.Writer, p pantograph.Part, s pantograph.Summary) error {
 	out := checkJSON{Name: s.Name, File: p.Source, Units: string(s.Units),
 		Stock: stockJSON{s.Stock.Material, round(s.Stock.Thickness)}, Area: round(s.Area),
 		Features: []featureJSON{}, Problems: []problemJSON{}}

@@ -101,25 +101,25 @@ Exit codes: 0 done, 1 the machine file lists no styli, 2 bad flags or a bad mach
 `
 
 // runHelp prints the general help or a command's help.
-func runHelp(args []string, stdout, stderr io.Writer) int {
+func runHelp(args []string, stdout io.Writer) error {
+	var err error
 	switch {
-	case len(args) == 0:
-		fmt.Fprint(stdout, usage)
+	case len(args) == 0, args[0] == "help", args[0] == "-h", args[0] == "--help":
+		_, err = fmt.Fprint(stdout, usage)
 	case args[0] == "check":
-		fmt.Fprintf(stdout, checkUsage, defaultMinWall)
+		_, err = fmt.Fprintf(stdout, checkUsage, defaultMinWall)
 	case args[0] == "plan":
-		fmt.Fprint(stdout, planUsage)
+		_, err = fmt.Fprint(stdout, planUsage)
 	case args[0] == "stylus":
-		fmt.Fprint(stdout, stylusUsage)
+		_, err = fmt.Fprint(stdout, stylusUsage)
 	case args[0] == "import":
-		fmt.Fprintf(stdout, importUsage, cad.DefaultHoleMaxMM)
+		_, err = fmt.Fprintf(stdout, importUsage, cad.DefaultHoleMaxMM)
 	case args[0] == "sheet":
-		fmt.Fprint(stdout, sheetUsage)
+		_, err = fmt.Fprint(stdout, sheetUsage)
 	case args[0] == "make":
-		fmt.Fprint(stdout, makeUsage)
+		_, err = fmt.Fprint(stdout, makeUsage)
 	default:
-		fmt.Fprintf(stderr, "panto: no help for %q: there is no such command\n", args[0])
-		return exitUsage
+		return &exitError{exitUsage, fmt.Sprintf("panto: no help for %q: there is no such command", args[0])}
 	}
-	return exitOK
+	return err
 }

@@ -29,7 +29,7 @@ const importSynopsis = "panto import DRAWING.dxf|DRAWING.svg [-o PART.toml] [--u
 
 // runImport is `panto import DRAWING`: read a DXF or SVG drawing, say what became what, and
 // write a part file.
-func runImport(args []string, stdout, stderr io.Writer) int {
+func runImport(args []string, stdout, stderr io.Writer) error {
 	var o importFlags
 	fl := pflag.NewFlagSet("import", pflag.ContinueOnError)
 	fl.SetOutput(io.Discard)
@@ -39,15 +39,14 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 	fl.StringVar(&o.stuff, "material", "", "stock material, e.g. brass")
 	fl.BoolVar(&o.force, "force", false, "overwrite the part file if it exists")
 	fl.BoolVarP(&o.help, "help", "h", false, "show help")
-	if code, done := parseOne("import", "drawing", importSynopsis, fl, args, &o.help, stdout, stderr); done {
-		return code
+	if done, err := parseOne("import", "drawing", importSynopsis, fl, args, &o.help, stdout); done {
+		return err
 	}
 	opts, err := o.options()
 	if err != nil {
-		fmt.Fprintf(stderr, "panto import: %v\n", err)
-		return exitUsage
+		return usagef("import", "%v", err)
 	}
-	return importDrawing(fl.Arg(0), o, opts, stdout, stderr)
+	return importDrawing(fl.Arg(0), o, opts, stdout)
 }
 
 // options turns the flags into drawing options. The stock's thickness is in the drawing's
@@ -62,41 +61,36 @@ func (o importFlags) options() (cad.Options, error) {
 }
 
 // importDrawing reads the drawing, prints the report and writes the part file.
-func importDrawing(path string, o importFlags, opts cad.Options, stdout, stderr io.Writer) int {
+func importDrawing(path string, o importFlags, opts cad.Options, stdout io.Writer) error {
 	if !cad.IsDrawing(path) {
-		fmt.Fprintf(stderr, "panto import: %s: give a .dxf or .svg drawing\n", path)
-		return exitUsage
+		return usagef("import", "%s: give a .dxf or .svg drawing", path)
 	}
 	out := o.out
 	if out == "" {
 		out = strings.TrimSuffix(path, filepath.Ext(path)) + ".toml"
 	}
 	if _, err := os.Stat(out); err == nil && !o.force {
-		fmt.Fprintf(stderr, "panto import: %s already exists; give --force to overwrite it, or -o another name\n", out)
-		return exitUsage
+		return usagef("import", "%s already exists; give --force to overwrite it, or -o another name", out)
 	}
 	part, rep, err := cad.ReadFile(path, opts)
 	if err != nil {
-		return reportFileError("import", "drawing", err, stderr)
+		return badFile("import", "drawing", err)
 	}
 	rep.WriteTo(stdout)
 	var buf bytes.Buffer
 	enc := partfile.Encoder{Header: importHeader(path, rep)}
 	if err := enc.Encode(&buf, part); err != nil {
-		fmt.Fprintf(stderr, "panto import: %v\n", err)
-		return exitFailed
+		return failf("import", "%v", err)
 	}
 	if _, err := partfile.Read(out, buf.Bytes()); err != nil {
 		// The writer and reader disagree: a bug, not the user's fault. Say so plainly.
-		fmt.Fprintf(stderr, "panto import: the part file written does not read back (%v); please report this\n", err)
-		return exitFailed
+		return failf("import", "the part file written does not read back (%v); please report this", err)
 	}
 	if err := writeFileAtomic(out, buf.Bytes()); err != nil {
-		fmt.Fprintf(stderr, "panto import: %v\n", err)
-		return exitFailed
+		return failf("import", "%v", err)
 	}
 	fmt.Fprintf(stdout, "wrote %s; check it with: panto check %s\n", out, out)
-	return exitOK
+	return nil
 }
 
 // importHeader is the comment at the top of an imported part file.

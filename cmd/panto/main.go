@@ -1,6 +1,13 @@
-// Command panto turns a part description into what a manual pantograph mill needs. For now it
-// checks part files: `panto check PART` says whether the part is well formed and what limits
-// the cutter. Run `panto help` for usage.
+// Command panto prepares parts for a manual pantograph mill. It checks a part file against the
+// cutters at hand (check), works out the stylus and its compensation (stylus), plans the
+// template and the order of work (plan), writes the dial-reading sheet (sheet) or everything
+// the machine needs into one folder (make: the template plate, true-scale drawings, DXF for a
+// laser and the sheet), and turns a DXF or SVG drawing into a part file (import). Run
+// `panto help` for usage.
+//
+// run is the whole program behind main, so tests call it in-process. Each command returns an
+// error carrying its exit code (exitError) and run prints it once; reports for the terminal
+// are written in this package, files are encoded by the export packages.
 package main
 
 import (
@@ -23,30 +30,29 @@ func main() { os.Exit(run(os.Args[1:], os.Stdout, os.Stderr)) }
 
 // run is the whole program behind main, so tests can run it in-process.
 func run(args []string, stdout, stderr io.Writer) int {
+	return exitCode(dispatch(args, stdout, stderr), stderr)
+}
+
+// dispatch runs the command args name.
+func dispatch(args []string, stdout, stderr io.Writer) error {
 	if len(args) == 0 {
 		fmt.Fprint(stderr, usage)
-		return exitUsage
+		return &exitError{code: exitUsage}
 	}
-	switch cmd, rest := args[0], args[1:]; cmd {
+	cmd, rest := args[0], args[1:]
+	switch cmd {
 	case "help", "-h", "--help":
-		return runHelp(rest, stdout, stderr)
+		return runHelp(rest, stdout)
 	case "version", "--version":
-		fmt.Fprintf(stdout, "panto %s\n", version)
-		return exitOK
-	case "check":
-		return runCheck(rest, stdout, stderr)
-	case "plan":
-		return runPlan(rest, stdout, stderr)
-	case "sheet":
-		return runSheet(rest, stdout, stderr)
-	case "make":
-		return runMake(rest, stdout, stderr)
-	case "stylus":
-		return runStylus(rest, stdout, stderr)
-	case "import":
-		return runImport(rest, stdout, stderr)
-	default:
-		fmt.Fprintf(stderr, "panto: unknown command %q\nRun 'panto help' to see the commands.\n", cmd)
-		return exitUsage
+		_, err := fmt.Fprintf(stdout, "panto %s\n", version)
+		return err
 	}
+	commands := map[string]func(args []string, stdout, stderr io.Writer) error{
+		"check": runCheck, "plan": runPlan, "sheet": runSheet, "make": runMake,
+		"stylus": runStylus, "import": runImport,
+	}
+	if c, ok := commands[cmd]; ok {
+		return c(rest, stdout, stderr)
+	}
+	return &exitError{exitUsage, fmt.Sprintf("panto: unknown command %q\nRun 'panto help' to see the commands.", cmd)}
 }

@@ -32,7 +32,7 @@ type makeJob struct {
 // makeWriter returns some of the files `panto make` writes, and writes to report what the
 // machinist should know about them. Each writer is independent, so an output is added by
 // adding a writer to makeWriters, in its own file.
-type makeWriter func(j makeJob, report io.Writer) ([]sheetFile, error)
+type makeWriter func(j makeJob, report io.Writer) ([]outputFile, error)
 
 // makeWriters lists what `panto make` writes, in order: the template plate (this file), the
 // dial sheet and drawings (make_sheet.go), then the DXF files for cutting (make_dxf.go).
@@ -42,7 +42,7 @@ func makeWriters() []makeWriter {
 
 // runMake is `panto make PART ...`: plan the part and write the template plate, the sheet and
 // the drawings into one folder.
-func runMake(args []string, stdout, stderr io.Writer) int {
+func runMake(args []string, stdout, stderr io.Writer) error {
 	var o planFlags
 	var mo makeFlags
 	fl := pflag.NewFlagSet("make", pflag.ContinueOnError)
@@ -53,8 +53,8 @@ func runMake(args []string, stdout, stderr io.Writer) int {
 	fl.StringVar(&mo.style, "style", "wall", "how traced edges are made: wall or groove")
 	fl.Float64Var(&mo.fixingSpacing, "fixing-spacing", 0, "distance between fixing slots, mm")
 	fl.Float64Var(&mo.kerf, "kerf", 0, "width the laser or router cuts, mm, for template.dxf")
-	if code, done := parseOne("make", partOrDrawing, makeSynopsis, fl, args, &o.help, stdout, stderr); done {
-		return code
+	if done, err := parseOne("make", partOrDrawing, makeSynopsis, fl, args, &o.help, stdout); done {
+		return err
 	}
 	plate, err := mo.plateOptions()
 	if err == nil && mo.out == "" {
@@ -65,8 +65,7 @@ func runMake(args []string, stdout, stderr io.Writer) int {
 		err = serr
 	}
 	if err != nil {
-		fmt.Fprintf(stderr, "panto make: %v\n", err)
-		return exitUsage
+		return usagef("make", "%v", err)
 	}
 	mo.dateToday()
 	return makeAll(fl.Arg(0), setup, o, mo, plate, stdout, stderr)
@@ -91,45 +90,41 @@ func (mo makeFlags) plateOptions() (pantograph.PlateOptions, error) {
 
 // makeAll reads, plans, and writes every file; nothing is written unless all could be made.
 func makeAll(path string, setup pantograph.Setup, o planFlags, mo makeFlags,
-	plate pantograph.PlateOptions, stdout, stderr io.Writer) int {
-	pj, code, ok := readAndPlan("make", path, o, setup, stderr)
-	if !ok {
-		return code
+	plate pantograph.PlateOptions, stdout, stderr io.Writer) error {
+	pj, err := readAndPlan("make", path, o, setup, stderr)
+	if err != nil {
+		return err
 	}
 	p := pj.plan
 	if !p.Done() {
-		return planExit(p, stderr)
+		return planOutcome("make", p)
 	}
 	j := makeJob{planned: pj, plate: plate, paper: mo.paper, date: mo.date, kerf: mo.kerf}
-	var files []sheetFile
+	var files []outputFile
 	var report bytes.Buffer
 	for _, w := range makeWriters() {
 		fs, err := w(j, &report)
 		if err != nil {
-			fmt.Fprintf(stderr, "panto make: %v\n", err)
-			return exitFailed
+			return failf("make", "%v", err)
 		}
 		files = append(files, fs...)
 	}
-	if err := writeSheetFiles(mo.out, files, mo.force); err != nil {
-		fmt.Fprintf(stderr, "panto make: %v\n", err)
-		return exitFailed
+	if err := writeOutputs(mo.out, files, mo.force); err != nil {
+		return failf("make", "%v", err)
 	}
 	stdout.Write(report.Bytes())
-	for _, w := range p.Warnings {
-		fmt.Fprintf(stderr, "warning: %s\n", w)
-	}
-	return exitOK
+	warnPlan(stderr, p)
+	return nil
 }
 
 // sheetWriter returns the dial sheet and the drawings.
-func sheetWriter(j makeJob, _ io.Writer) ([]sheetFile, error) {
-	return makeSheetFiles(j.part, j.plan, j.machine, j.paper, j.date)
+func sheetWriter(j makeJob, _ io.Writer) ([]outputFile, error) {
+	return sheetAndDrawingFiles(j.part, j.plan, j.machine, j.paper, j.date)
 }
 
 // plateWriter returns template.stl and reports the plate's size, its triangles and how to print
 // it.
-func plateWriter(j makeJob, report io.Writer) ([]sheetFile, error) {
+func plateWriter(j makeJob, report io.Writer) ([]outputFile, error) {
 	pl, err := pantograph.BuildPlate(j.plan, j.machine, j.plate)
 	if err != nil {
 		return nil, err
@@ -143,7 +138,7 @@ func plateWriter(j makeJob, report io.Writer) ([]sheetFile, error) {
 		return nil, err
 	}
 	writePlateReport(report, pl, len(m.Triangles))
-	return []sheetFile{{"template.stl", b.Bytes()}}, nil
+	return []outputFile{{"template.stl", b.Bytes()}}, nil
 }
 
 // writePlateReport tells the machinist what was made and how to print it.

@@ -13,7 +13,7 @@ import (
 // template.dxf and part.dxf.
 
 // dxfWriter returns template.dxf and part.dxf and says what they are for.
-func dxfWriter(j makeJob, report io.Writer) ([]sheetFile, error) {
+func dxfWriter(j makeJob, report io.Writer) ([]outputFile, error) {
 	files, err := makeDXFFiles(j.part, j.plan, j.kerf)
 	if err != nil {
 		return nil, err
@@ -33,7 +33,7 @@ func dxfWriter(j makeJob, report io.Writer) ([]sheetFile, error) {
 // makeDXFFiles returns the DXF files `panto make` writes into the output folder beside the
 // plate: template.dxf (outline, openings, seats, grooves and labels on their own layers, in
 // template mm, the laser kerf compensated when kerf > 0) and part.dxf (the part at true size).
-func makeDXFFiles(part pantograph.Part, p pantograph.Plan, kerf float64) ([]sheetFile, error) {
+func makeDXFFiles(part pantograph.Part, p pantograph.Plan, kerf float64) ([]outputFile, error) {
 	ct, err := pantograph.TemplateForCutting(p, kerf)
 	if err != nil {
 		return nil, fmt.Errorf("template.dxf: %w", err)

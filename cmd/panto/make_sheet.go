@@ -10,12 +10,12 @@ import (
 )
 
 // This file is what `panto make` and `panto sheet` write besides the template plate: the
-// dial-reading sheet in four forms and the true-scale drawings. make calls makeSheetFiles.
+// dial-reading sheet in four forms and the true-scale drawings. make calls sheetAndDrawingFiles.
 
-// makeSheetFiles returns the sheet and drawing files for a plan, to be written into the output
-// folder with the plate: sheet.pdf, sheet.csv, sheet.json, template.svg, template.pdf,
+// sheetAndDrawingFiles returns the sheet and drawing files for a plan, to be written into the
+// output folder with the plate: sheet.pdf, sheet.csv, sheet.json, template.svg, template.pdf,
 // part.svg, part.pdf and sheet.txt. m may be nil (no machine file: positions in mm only).
-func makeSheetFiles(part pantograph.Part, p pantograph.Plan, m *pantograph.Machine, paperName, date string) ([]sheetFile, error) {
+func sheetAndDrawingFiles(part pantograph.Part, p pantograph.Plan, m *pantograph.Machine, paperName, date string) ([]outputFile, error) {
 	sheets, err := sheetFiles(p, m, paperName, date)
 	if err != nil {
 		return nil, err
@@ -30,7 +30,7 @@ func makeSheetFiles(part pantograph.Part, p pantograph.Plan, m *pantograph.Machi
 }
 
 // sheetFiles returns sheet.pdf, sheet.csv, sheet.json and, last, sheet.txt.
-func sheetFiles(p pantograph.Plan, m *pantograph.Machine, paperName, date string) ([]sheetFile, error) {
+func sheetFiles(p pantograph.Plan, m *pantograph.Machine, paperName, date string) ([]outputFile, error) {
 	paper, err := drawing.PaperNamed(paperName)
 	if err != nil {
 		return nil, fmt.Errorf("--paper: %v", err)
@@ -49,7 +49,7 @@ func sheetFiles(p pantograph.Plan, m *pantograph.Machine, paperName, date string
 }
 
 // drawingFiles returns template.svg, template.pdf, part.svg and part.pdf.
-func drawingFiles(part pantograph.Part, p pantograph.Plan, paperName string) ([]sheetFile, error) {
+func drawingFiles(part pantograph.Part, p pantograph.Plan, paperName string) ([]outputFile, error) {
 	paper, err := drawing.PaperNamed(paperName)
 	if err != nil {
 		return nil, fmt.Errorf("--paper: %v", err)
@@ -69,14 +69,14 @@ type fileEncoder struct {
 }
 
 // encodeFiles makes each file in order; an error names the file.
-func encodeFiles(fs []fileEncoder) ([]sheetFile, error) {
-	out := make([]sheetFile, 0, len(fs))
+func encodeFiles(fs []fileEncoder) ([]outputFile, error) {
+	out := make([]outputFile, 0, len(fs))
 	for _, f := range fs {
 		var b bytes.Buffer
 		if err := f.enc(&b); err != nil {
 			return nil, fmt.Errorf("%s: %w", f.name, err)
 		}
-		out = append(out, sheetFile{f.name, b.Bytes()})
+		out = append(out, outputFile{f.name, b.Bytes()})
 	}
 	return out, nil
 }

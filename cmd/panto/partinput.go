@@ -4,7 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
-	"io/fs"
+	"strings"
 
 	"github.com/spf13/pflag"
 
@@ -102,21 +102,19 @@ func addPlanFlags(fl *pflag.FlagSet, o *planFlags) {
 }
 
 // parseOne parses the flags of command cmd, which takes exactly one file (what names it in
-// messages). done is true when the command should stop with code: bad flags, or help shown.
+// messages). done is true when the command should stop here, with err nil when help was shown.
 func parseOne(cmd, what, synopsis string, fl *pflag.FlagSet, args []string, help *bool,
-	stdout, stderr io.Writer) (code int, done bool) {
+	stdout io.Writer) (done bool, err error) {
 	if err := fl.Parse(args); err != nil {
-		fmt.Fprintf(stderr, "panto %s: %v\nRun 'panto help %s' for usage.\n", cmd, err, cmd)
-		return exitUsage, true
+		return true, usagef(cmd, "%v\nRun 'panto help %s' for usage.", err, cmd)
 	}
 	if *help {
-		return runHelp([]string{cmd}, stdout, stderr), true
+		return true, runHelp([]string{cmd}, stdout)
 	}
 	if fl.NArg() != 1 {
-		fmt.Fprintf(stderr, "panto %s: give exactly one %s, got %d\nUsage: %s\n", cmd, what, fl.NArg(), synopsis)
-		return exitUsage, true
+		return true, usagef(cmd, "give exactly one %s, got %d\nUsage: %s", what, fl.NArg(), synopsis)
 	}
-	return exitOK, false
+	return false, nil
 }
 
 // partOrDrawing is what the commands that plan take as PART.
@@ -129,19 +127,18 @@ type planned struct {
 	machine *pantograph.Machine // nil without a machine file
 }
 
-// readAndPlan reads the part or drawing at path and the machine file, and plans. When it
-// fails it has said why on stderr, and ok is false with the exit code.
-func readAndPlan(cmd, path string, o planFlags, setup pantograph.Setup, stderr io.Writer) (j planned, code int, ok bool) {
-	part, code, ok := readPart(cmd, path, o, stderr)
-	if !ok {
-		return j, code, false
+// readAndPlan reads the part or drawing at path and the machine file, and plans.
+func readAndPlan(cmd, path string, o planFlags, setup pantograph.Setup, stderr io.Writer) (planned, error) {
+	var j planned
+	part, err := readPart(cmd, path, o, stderr)
+	if err != nil {
+		return j, err
 	}
 	j.part = part
 	if o.machine != "" {
 		m, err := partfile.ReadMachineFile(o.machine)
 		if err != nil {
-			fmt.Fprintf(stderr, "panto %s: %v\n", cmd, err)
-			return j, exitUsage, false
+			return j, badFile(cmd, "machine file", err)
 		}
 		j.machine = &m
 	}
@@ -149,31 +146,29 @@ func readAndPlan(cmd, path string, o planFlags, setup pantograph.Setup, stderr i
 	var pe pantograph.PartErrors
 	switch {
 	case errors.As(err, &pe):
+		var b strings.Builder
 		for _, pr := range pe {
-			fmt.Fprintln(stderr, pr.Error())
+			b.WriteString(pr.Error() + "\n")
 		}
-		fmt.Fprintf(stderr, "panto %s: %s has errors; fix them first (panto check shows them all)\n", cmd, path)
-		return j, exitUsage, false
+		fmt.Fprintf(&b, "panto %s: %s has errors; fix them first (panto check shows them all)", cmd, path)
+		return j, &exitError{exitUsage, b.String()}
 	case err != nil:
-		fmt.Fprintf(stderr, "panto %s: %v\n", cmd, err)
-		return j, exitUsage, false
+		return j, usagef(cmd, "%v", err)
 	}
 	j.plan = p
-	return j, exitOK, true
+	return j, nil
 }
 
 // readPart reads a part file, or a drawing with the drawing flags (its report going to
 // stderr), and puts in the stock given by --thickness and --material.
-func readPart(cmd, path string, o planFlags, stderr io.Writer) (pantograph.Part, int, bool) {
+func readPart(cmd, path string, o planFlags, stderr io.Writer) (pantograph.Part, error) {
 	isDrawing := cad.IsDrawing(path)
 	if !isDrawing && len(o.drawingGiven) > 0 {
-		fmt.Fprintf(stderr, "panto %s: %s is for reading a drawing; %s is a part file\n", cmd, o.drawingGiven[0], path)
-		return pantograph.Part{}, exitUsage, false
+		return pantograph.Part{}, usagef(cmd, "%s is for reading a drawing; %s is a part file", o.drawingGiven[0], path)
 	}
 	opts, err := o.drawing.options()
 	if err != nil {
-		fmt.Fprintf(stderr, "panto %s: %v\n", cmd, err)
-		return pantograph.Part{}, exitUsage, false
+		return pantograph.Part{}, usagef(cmd, "%v", err)
 	}
 	part, err := readPartOrDrawing(path, opts, stderr)
 	if err != nil {
@@ -181,18 +176,16 @@ func readPart(cmd, path string, o planFlags, stderr io.Writer) (pantograph.Part,
 		if isDrawing {
 			what = "drawing"
 		}
-		return part, reportFileError(cmd, what, err, stderr), false
+		return part, badFile(cmd, what, err)
 	}
 	overrideStock(&part, o, isDrawing, stderr)
 	if err := moveDatum(&part, o.datum); err != nil {
-		fmt.Fprintf(stderr, "panto %s: %v\n", cmd, err)
-		return part, exitUsage, false
+		return part, usagef(cmd, "%v", err)
 	}
 	if isDrawing && part.Stock.Thickness == 0 {
-		fmt.Fprintf(stderr, "panto %s: %s: a drawing does not say how thick the stock is; give it with --thickness MM (and --material NAME)\n", cmd, path)
-		return part, exitUsage, false
+		return part, usagef(cmd, "%s: a drawing does not say how thick the stock is; give it with --thickness MM (and --material NAME)", path)
 	}
-	return part, exitOK, true
+	return part, nil
 }
 
 // overrideStock puts the stock from the flags into the part. A drawing carries none; a part
@@ -233,16 +226,4 @@ func moveDatum(part *pantograph.Part, xy []float64) error {
 	}
 	part.Datum = d
 	return nil
-}
-
-// reportFileError explains why the part file or drawing (what) could not be read: a file that
-// cannot be opened is named with the command; a bad file's error already names file and line.
-func reportFileError(cmd, what string, err error, stderr io.Writer) int {
-	var pe *fs.PathError
-	if errors.As(err, &pe) {
-		fmt.Fprintf(stderr, "panto %s: cannot read the %s: %v\n", cmd, what, err)
-		return exitUsage
-	}
-	fmt.Fprintln(stderr, err)
-	return exitUsage
 }

@@ -28,59 +28,58 @@ type planFlags struct {
 }
 
 // runPlan is `panto plan PART --ratio R --cutter D [...]`.
-func runPlan(args []string, stdout, stderr io.Writer) int {
+func runPlan(args []string, stdout, stderr io.Writer) error {
 	var o planFlags
 	fl := pflag.NewFlagSet("plan", pflag.ContinueOnError)
 	fl.SetOutput(io.Discard)
 	addPlanFlags(fl, &o)
 	fl.BoolVar(&o.asJSON, "json", false, "print the plan as JSON")
-	if code, done := parseOne("plan", partOrDrawing, planSynopsis, fl, args, &o.help, stdout, stderr); done {
-		return code
+	if done, err := parseOne("plan", partOrDrawing, planSynopsis, fl, args, &o.help, stdout); done {
+		return err
 	}
 	setup, err := o.setup(fl)
 	if err != nil {
-		fmt.Fprintf(stderr, "panto plan: %v\n", err)
-		return exitUsage
+		return usagef("plan", "%v", err)
 	}
-	return plan(fl.Arg(0), setup, o, stdout, stderr)
-}
-
-// plan reads the files, plans, prints and picks the exit code.
-func plan(path string, setup pantograph.Setup, o planFlags, stdout, stderr io.Writer) int {
-	j, code, ok := readAndPlan("plan", path, o, setup, stderr)
-	if !ok {
-		return code
+	j, err := readAndPlan("plan", fl.Arg(0), o, setup, stderr)
+	if err != nil {
+		return err
 	}
 	p := j.plan
 	if o.asJSON {
 		if err := writePlanJSON(stdout, p); err != nil {
-			fmt.Fprintf(stderr, "panto plan: %v\n", err)
-			return exitFailed
+			return err
 		}
 	} else {
 		writePlan(stdout, p)
 	}
+	warnPlan(stderr, p)
+	return planOutcome("plan", p)
+}
+
+// warnPlan prints the plan's warnings on standard error.
+func warnPlan(stderr io.Writer, p pantograph.Plan) {
 	for _, w := range p.Warnings {
 		fmt.Fprintf(stderr, "warning: %s\n", w)
 	}
-	return planExit(p, stderr)
 }
 
-// planExit says why a plan cannot be carried out, and returns the exit code.
-func planExit(p pantograph.Plan, stderr io.Writer) int {
+// planOutcome says why a plan cannot be carried out (exit 1), or nil when it can.
+func planOutcome(cmd string, p pantograph.Plan) error {
 	if p.Done() {
-		return exitOK
+		return nil
 	}
+	var why []string
 	for _, w := range p.Warnings {
 		if w.Stops {
-			fmt.Fprintf(stderr, "panto plan: the job cannot be done as planned: %s\n", w)
+			why = append(why, fmt.Sprintf("panto %s: the job cannot be done as planned: %s", cmd, w))
 		}
 	}
 	if lost := p.Lost(); len(lost) > 0 && !p.Setup.AcceptLoss {
-		fmt.Fprintf(stderr, "panto plan: the cutter cannot make %s; use a smaller cutter, or pass --accept-loss to plan without %s\n",
-			quoteList(lost), them(len(lost)))
+		why = append(why, fmt.Sprintf("panto %s: the cutter cannot make %s; use a smaller cutter, or pass --accept-loss to plan without %s",
+			cmd, quoteList(lost), them(len(lost))))
 	}
-	return exitFailed
+	return &exitError{exitFailed, strings.Join(why, "\n")}
 }
 
 // setup turns the flags into a Setup, and notes which drawing flags were given; Validate is

@@ -8,8 +8,6 @@ import (
 	"time"
 
 	"github.com/spf13/pflag"
-
-	"panto/pantograph"
 )
 
 // sheetFlags are the options of `panto sheet` beyond those it shares with `panto plan`.
@@ -43,7 +41,7 @@ func (o *outputFlags) dateToday() {
 const sheetSynopsis = "panto sheet PART --ratio R --cutter D [--machine FILE] [--out DIR] [--paper a4|letter] [--print] [--force]"
 
 // runSheet is `panto sheet PART ...`: plan the part and write the dial-reading sheet.
-func runSheet(args []string, stdout, stderr io.Writer) int {
+func runSheet(args []string, stdout, stderr io.Writer) error {
 	var o planFlags
 	var so sheetFlags
 	fl := pflag.NewFlagSet("sheet", pflag.ContinueOnError)
@@ -51,55 +49,45 @@ func runSheet(args []string, stdout, stderr io.Writer) int {
 	addPlanFlags(fl, &o)
 	addOutputFlags(fl, &so.outputFlags, ".")
 	fl.BoolVar(&so.print, "print", false, "also print the sheet on standard output")
-	if code, done := parseOne("sheet", partOrDrawing, sheetSynopsis, fl, args, &o.help, stdout, stderr); done {
-		return code
+	if done, err := parseOne("sheet", partOrDrawing, sheetSynopsis, fl, args, &o.help, stdout); done {
+		return err
 	}
 	setup, err := o.setup(fl)
 	if err != nil {
-		fmt.Fprintf(stderr, "panto sheet: %v\n", err)
-		return exitUsage
+		return usagef("sheet", "%v", err)
 	}
 	so.dateToday()
-	return sheetJob(fl.Arg(0), setup, o, so, stdout, stderr)
-}
-
-// sheetJob reads, plans, and writes the sheet files.
-func sheetJob(path string, setup pantograph.Setup, o planFlags, so sheetFlags, stdout, stderr io.Writer) int {
-	j, code, ok := readAndPlan("sheet", path, o, setup, stderr)
-	if !ok {
-		return code
+	j, err := readAndPlan("sheet", fl.Arg(0), o, setup, stderr)
+	if err != nil {
+		return err
 	}
 	p := j.plan
 	if !p.Done() {
-		return planExit(p, stderr)
+		return planOutcome("sheet", p)
 	}
 	files, err := sheetFiles(p, j.machine, so.paper, so.date)
 	if err != nil {
-		fmt.Fprintf(stderr, "panto sheet: %v\n", err)
-		return exitUsage
+		return usagef("sheet", "%v", err)
 	}
-	if err := writeSheetFiles(so.out, files, so.force); err != nil {
-		fmt.Fprintf(stderr, "panto sheet: %v\n", err)
-		return exitFailed
+	if err := writeOutputs(so.out, files, so.force); err != nil {
+		return failf("sheet", "%v", err)
 	}
 	if so.print {
 		stdout.Write(files[len(files)-1].data) // sheet.txt is last
 	}
-	for _, w := range p.Warnings {
-		fmt.Fprintf(stderr, "warning: %s\n", w)
-	}
-	return exitOK
+	warnPlan(stderr, p)
+	return nil
 }
 
-// sheetFile is one file to write: its name in the output folder and its bytes.
-type sheetFile struct {
+// outputFile is one file to write: its name in the output folder and its bytes.
+type outputFile struct {
 	name string
 	data []byte
 }
 
-// writeSheetFiles writes every file into dir, each to a temporary name first and then renamed, so
+// writeOutputs writes every file into dir, each to a temporary name first and then renamed, so
 // an interrupted run leaves no half file. Without force nothing is written if any file exists.
-func writeSheetFiles(dir string, files []sheetFile, force bool) error {
+func writeOutputs(dir string, files []outputFile, force bool) error {
 	if err := os.MkdirAll(dir, 0o755); err != nil {
 		return fmt.Errorf("cannot make the output folder: %w", err)
 	}

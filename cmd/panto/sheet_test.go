@@ -96,7 +96,7 @@ func TestMakeSheetFiles(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	files, err := makeSheetFiles(part, p, &m, "letter", "")
+	files, err := sheetAndDrawingFiles(part, p, &m, "letter", "")
 	if err != nil {
 		t.Fatal(err)
 	}

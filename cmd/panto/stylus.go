@@ -5,7 +5,6 @@ import (
 	"errors"
 	"fmt"
 	"io"
-	"io/fs"
 	"math"
 	"strings"
 
@@ -29,10 +28,10 @@ type stylusArgs struct {
 }
 
 // runStylus is `panto stylus --ratio R (--cutter D | --stylus D | both) [--machine FILE]`.
-func runStylus(args []string, stdout, stderr io.Writer) int {
-	a, code, done := parseStylus(args, stdout, stderr)
+func runStylus(args []string, stdout, stderr io.Writer) error {
+	a, done, err := parseStylus(args, stdout)
 	if done {
-		return code
+		return err
 	}
 	rep := stylusReport{args: a, units: pantograph.MM}
 	if a.inch {
@@ -41,33 +40,28 @@ func runStylus(args []string, stdout, stderr io.Writer) int {
 	if a.machine != "" {
 		m, err := partfile.ReadMachineFile(a.machine)
 		if err != nil {
-			return reportMachineError(err, stderr)
+			return badFile("stylus", "machine file", err)
 		}
 		rep.machine = &m
 	}
 	rep.work()
-	var err error
 	if a.json {
 		err = rep.writeJSON(stdout)
 	} else {
 		err = rep.writeText(stdout)
 	}
 	if err != nil {
-		fmt.Fprintf(stderr, "panto stylus: %v\n", err)
-		return exitFailed
+		return err
 	}
-	for _, w := range rep.warnings {
-		fmt.Fprintln(stderr, "panto stylus: warning: "+w)
-	}
+	warn(stderr, "panto stylus: warning: ", rep.warnings)
 	if rep.failure != "" {
-		fmt.Fprintln(stderr, "panto stylus: "+rep.failure)
-		return exitFailed
+		return failf("stylus", "%s", rep.failure)
 	}
-	return exitOK
+	return nil
 }
 
-// parseStylus reads and checks the flags; done is true when the command ends here with code.
-func parseStylus(args []string, stdout, stderr io.Writer) (a stylusArgs, code int, done bool) {
+// parseStylus reads and checks the flags; done is true when the command ends here with err.
+func parseStylus(args []string, stdout io.Writer) (a stylusArgs, done bool, err error) {
 	fl := pflag.NewFlagSet("stylus", pflag.ContinueOnError)
 	fl.SetOutput(io.Discard)
 	fl.Float64Var(&a.ratio, "ratio", 0, "ratio R, template size : part size")
@@ -77,11 +71,11 @@ func parseStylus(args []string, stdout, stderr io.Writer) (a stylusArgs, code in
 	units := fl.String("units", "mm", `"mm" or "in"`)
 	fl.BoolVar(&a.json, "json", false, "print JSON")
 	help := fl.BoolP("help", "h", false, "show help")
-	err := fl.Parse(args)
+	err = fl.Parse(args)
 	switch {
 	case err != nil:
 	case *help:
-		return a, runHelp([]string{"stylus"}, stdout, stderr), true
+		return a, true, runHelp([]string{"stylus"}, stdout)
 	case fl.NArg() > 0:
 		err = fmt.Errorf("unexpected argument %q: every value goes with a flag", fl.Arg(0))
 	case *units != "mm" && *units != "in":
@@ -93,14 +87,13 @@ func parseStylus(args []string, stdout, stderr io.Writer) (a stylusArgs, code in
 		err = a.check()
 	}
 	if err != nil {
-		fmt.Fprintf(stderr, "panto stylus: %v\n%sRun 'panto help stylus' for more.\n", err, stylusSynopsis)
-		return a, exitUsage, true
+		return a, true, usagef("stylus", "%v\n%sRun 'panto help stylus' for more.", err, stylusSynopsis)
 	}
 	if a.inch = *units == "in"; a.inch {
 		a.cutter *= pantograph.MMPerInch
 		a.stylus *= pantograph.MMPerInch
 	}
-	return a, exitOK, false
+	return a, false, nil
 }
 
 // check says what is wrong with a combination of flags, or nil.
@@ -123,17 +116,6 @@ func (a stylusArgs) check() error {
 }
 
 func isSize(v float64) bool { return v > 0 && !math.IsInf(v, 1) }
-
-// reportMachineError explains why the machine file could not be read.
-func reportMachineError(err error, stderr io.Writer) int {
-	var pe *fs.PathError
-	if errors.As(err, &pe) {
-		fmt.Fprintf(stderr, "panto stylus: cannot read the machine file: %v\n", err)
-	} else {
-		fmt.Fprintln(stderr, err)
-	}
-	return exitUsage
-}
 
 // stylusReport is what `panto stylus` found, ready to print.
 type stylusReport struct {
