@@ -168,7 +168,7 @@ func TestProblemError(t *testing.T) {
 	p := Problem{Severity: Error, Feature: "pivots", Label: `[[holes]] "pivots"`, Message: "no hole positions given",
 		Where: Where{File: "bridge.toml", Line: 14}}
 	want := `bridge.toml:14: error: [[holes]] "pivots": no hole positions given`
-	if got := p.Error(); got != want {
+	if got := p.Diagnostic(); got != want {
 		t.Errorf("got %q, want %q", got, want)
 	}
 }

@@ -142,7 +142,7 @@ func (e PartErrors) Error() string {
 	var b strings.Builder
 	fmt.Fprintf(&b, "the part has %d error(s); run panto check on it", len(e))
 	for _, p := range e {
-		b.WriteString("\n" + p.Error())
+		b.WriteString("\n" + p.Diagnostic())
 	}
 	return b.String()
 }

@@ -32,8 +32,8 @@ type Problem struct {
 	Stops bool
 }
 
-// Error formats the problem the way a compiler would: place, severity, feature, message.
-func (p Problem) Error() string {
+// Diagnostic formats the problem the way a compiler would: place, severity, feature, message.
+func (p Problem) Diagnostic() string {
 	s := string(p.Severity) + ": "
 	if w := p.Where.String(); w != "" {
 		s = w + ": " + s

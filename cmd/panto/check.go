@@ -39,7 +39,7 @@ func runCheck(args []string, stdout, stderr io.Writer) error {
 		writeSummary(stdout, part, s)
 	}
 	for _, p := range s.Problems {
-		fmt.Fprintln(stderr, p.Error())
+		fmt.Fprintln(stderr, p.Diagnostic())
 	}
 	if pantograph.HasErrors(s.Problems) {
 		return &exitError{code: exitUsage}

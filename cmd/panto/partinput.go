@@ -148,7 +148,7 @@ func readAndPlan(cmd, path string, o planFlags, setup pantograph.Setup, stderr i
 	case errors.As(err, &pe):
 		var b strings.Builder
 		for _, pr := range pe {
-			b.WriteString(pr.Error() + "\n")
+			b.WriteString(pr.Diagnostic() + "\n")
 		}
 		fmt.Fprintf(&b, "panto %s: %s has errors; fix them first (panto check shows them all)", cmd, path)
 		return j, &exitError{exitUsage, b.String()}

@@ -19,6 +19,7 @@ func TestPlanExitCodes(t *testing.T) {
 		// derived: a 0.4 mm slot is lost under a 0.5 mm cutter.
 		{"lost feature", []string{"plan", narrow, "--ratio", "10", "--cutter", "0.5"}, exitFailed, "--accept-loss"},
 		{"loss accepted", []string{"plan", narrow, "--ratio", "10", "--cutter", "0.5", "--accept-loss"}, exitOK, "nothing of it is cut"},
+		{"warning said once", []string{"plan", narrow, "--ratio", "10", "--cutter", "0.5", "--accept-loss"}, exitOK, "warning: [[slot]] \"narrow\""},
 		{"small enough cutter", []string{"plan", narrow, "--ratio", "10", "--cutter", "0.4"}, exitOK, ""},
 		{"no ratio", []string{"plan", narrow, "--cutter", "0.5"}, exitUsage, "--ratio is required"},
 		{"no cutter", []string{"plan", narrow, "--ratio", "10"}, exitUsage, "--cutter is required"},
@@ -40,6 +41,9 @@ func TestPlanExitCodes(t *testing.T) {
 			}
 			if !strings.Contains(errOut, tc.frag) {
 				t.Fatalf("stderr got:\n%s\nwant it to contain %q", errOut, tc.frag)
+			}
+			if strings.Contains(errOut, "warning: warning") {
+				t.Errorf("stderr says warning twice:\n%s", errOut)
 			}
 		})
 	}

@@ -276,7 +276,7 @@ func firstMistake(file string, src []byte) (int, string) {
 	}
 	for _, pr := range pantograph.Check(p, pantograph.DefaultOptions()) {
 		if pr.Severity == pantograph.Error {
-			return pr.Where.Line, pr.Error()
+			return pr.Where.Line, pr.Diagnostic()
 		}
 	}
 	return 0, ""
