@@ -57,47 +57,76 @@ func TestRoundTrip(t *testing.T) {
 	}
 }
 
-// tol is how closely geometry must come back: the writer rounds to 1e-9 of a unit, and arcs are
-// rebuilt from three points (derived: rounding 1e-9 on points of a part tens of mm across moves
-// a rebuilt centre by well under 1e-6).
-const tol = 1e-6
+// relTol is how closely geometry must come back, relative to the part's size (at least 1 mm):
+// the writer rounds to 1e-9 of a unit, and arcs are rebuilt from three points (derived:
+// rounding 1e-9 on points of a part tens of mm across moves a rebuilt centre by well under
+// 1e-6).
+const relTol = 1e-6
 
+// samePart reports where got differs from want by more than relTol of want's size.
 func samePart(t *testing.T, got, want pantograph.Part) {
 	t.Helper()
+	tol := relTol * extent(want)
 	if got.Name != want.Name || got.Units != want.Units || got.Stock.Material != want.Stock.Material ||
 		math.Abs(got.Stock.Thickness-want.Stock.Thickness) > tol || got.Datum.Dist(want.Datum) > tol {
 		t.Errorf("head: got %q %q %+v %v, want %q %q %+v %v", got.Name, got.Units, got.Stock, got.Datum,
 			want.Name, want.Units, want.Stock, want.Datum)
 	}
-	sameContour(t, "profile", got.Profile.Region.Outer, want.Profile.Region.Outer)
+	sameContour(t, "profile", got.Profile.Region.Outer, want.Profile.Region.Outer, tol)
 	if len(got.Features) != len(want.Features) {
 		t.Fatalf("got %d features, want %d", len(got.Features), len(want.Features))
 	}
 	for i, g := range got.Features {
-		w := want.Features[i]
-		if g.Kind != w.Kind || g.Name != w.Name || g.Depth.Through != w.Depth.Through || math.Abs(g.Depth.MM-w.Depth.MM) > tol {
-			t.Errorf("feature %d: got %s %q depth %v, want %s %q depth %v", i, g.Kind, g.Name, g.Depth, w.Kind, w.Name, w.Depth)
+		sameFeature(t, i, g, want.Features[i], tol)
+	}
+}
+
+// extent is the largest size or coordinate magnitude in p, and at least 1 mm.
+func extent(p pantograph.Part) float64 {
+	e := math.Max(1, math.Max(math.Abs(p.Datum.X), math.Abs(p.Datum.Y)))
+	e = math.Max(e, p.Stock.Thickness)
+	grow := func(v geom.Vec) { e = math.Max(e, math.Max(math.Abs(v.X), math.Abs(v.Y))) }
+	for _, f := range p.All() {
+		b := f.Region.Bounds()
+		if !b.IsEmpty() {
+			grow(b.Min)
+			grow(b.Max)
 		}
-		sameContour(t, w.Name, g.Region.Outer, w.Region.Outer)
-		if math.Abs(g.Diameter-w.Diameter) > tol || len(g.Centers) != len(w.Centers) || len(g.Path) != len(w.Path) {
-			t.Errorf("feature %d: got Ø%g %v %v, want Ø%g %v %v", i, g.Diameter, g.Centers, g.Path, w.Diameter, w.Centers, w.Path)
-			continue
+		for _, v := range append(append([]geom.Vec{}, f.Centers...), f.Path...) {
+			grow(v)
 		}
-		for j := range g.Centers {
-			if g.Centers[j].Dist(w.Centers[j]) > tol {
-				t.Errorf("feature %d centre %d: got %v, want %v", i, j, g.Centers[j], w.Centers[j])
-			}
+		e = math.Max(e, math.Max(f.Diameter, math.Max(f.Width, f.Depth.MM)))
+	}
+	return e
+}
+
+// sameFeature compares feature i of two parts.
+func sameFeature(t *testing.T, i int, g, w pantograph.Feature, tol float64) {
+	t.Helper()
+	if g.Kind != w.Kind || g.Name != w.Name || g.Depth.Through != w.Depth.Through || math.Abs(g.Depth.MM-w.Depth.MM) > tol {
+		t.Errorf("feature %d: got %s %q depth %v, want %s %q depth %v", i, g.Kind, g.Name, g.Depth, w.Kind, w.Name, w.Depth)
+	}
+	sameContour(t, w.Name, g.Region.Outer, w.Region.Outer, tol)
+	if math.Abs(g.Diameter-w.Diameter) > tol || math.Abs(g.Width-w.Width) > tol ||
+		len(g.Centers) != len(w.Centers) || len(g.Path) != len(w.Path) {
+		t.Errorf("feature %d: got Ø%g w %g %v %v, want Ø%g w %g %v %v", i, g.Diameter, g.Width, g.Centers, g.Path,
+			w.Diameter, w.Width, w.Centers, w.Path)
+		return
+	}
+	for j := range g.Centers {
+		if g.Centers[j].Dist(w.Centers[j]) > tol {
+			t.Errorf("feature %d centre %d: got %v, want %v", i, j, g.Centers[j], w.Centers[j])
 		}
-		for j := range g.Path {
-			if g.Path[j].Dist(w.Path[j]) > tol {
-				t.Errorf("feature %d point %d: got %v, want %v", i, j, g.Path[j], w.Path[j])
-			}
+	}
+	for j := range g.Path {
+		if g.Path[j].Dist(w.Path[j]) > tol {
+			t.Errorf("feature %d point %d: got %v, want %v", i, j, g.Path[j], w.Path[j])
 		}
 	}
 }
 
 // sameContour compares two contours segment by segment, after both are normalised.
-func sameContour(t *testing.T, what string, got, want geom.Contour) {
+func sameContour(t *testing.T, what string, got, want geom.Contour, tol float64) {
 	t.Helper()
 	if len(got) != len(want) {
 		t.Errorf("%s: got %d segments, want %d", what, len(got), len(want))
@@ -106,7 +135,7 @@ func sameContour(t *testing.T, what string, got, want geom.Contour) {
 	for i := range got {
 		g, w := got[i], want[i]
 		if g.A.Dist(w.A) > tol || g.B.Dist(w.B) > tol || g.IsArc() != w.IsArc() ||
-			g.IsArc() && (g.Center.Dist(w.Center) > tol || math.Abs(g.Sweep-w.Sweep) > tol) {
+			g.IsArc() && (g.Center.Dist(w.Center) > tol || math.Abs(g.Sweep-w.Sweep) > relTol) {
 			t.Errorf("%s segment %d: got %v, want %v", what, i, g, w)
 		}
 	}
