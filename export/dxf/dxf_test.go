@@ -13,7 +13,7 @@ import (
 )
 
 // readBack reads a written drawing with panto's own DXF reader.
-func readBack(t *testing.T, b []byte) *cad.Sheet {
+func readBack(t *testing.T, b []byte) *cad.Drawing {
 	t.Helper()
 	sh, err := cad.ReadDXF("out.dxf", b, cad.Options{})
 	if err != nil {

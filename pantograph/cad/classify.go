@@ -23,17 +23,17 @@ type outline struct {
 
 // classifier holds what Classify needs while it works.
 type classifier struct {
-	sh    *Sheet
+	sh    *Drawing
 	opts  Options
 	scale float64 // mm per drawing unit
 	rep   Report
 	part  pantograph.Part
 }
 
-// Classify joins the sheet's segments into outlines and decides what each one is; see the
+// Classify joins the drawing's segments into outlines and decides what each one is; see the
 // package doc for the rules. It fails when an outline does not close (listing every loose
 // end) or when there is no closed outline to be the profile.
-func Classify(sh *Sheet, opts Options) (pantograph.Part, Report, error) {
+func Classify(sh *Drawing, opts Options) (pantograph.Part, Report, error) {
 	k := &classifier{sh: sh, opts: opts, scale: unitScale(sh.Units)}
 	k.rep = Report{File: sh.File, UnitsNote: sh.UnitsNote, Warnings: append([]string(nil), sh.Warnings...),
 		Skipped: sh.skippedText()}
@@ -51,7 +51,7 @@ func Classify(sh *Sheet, opts Options) (pantograph.Part, Report, error) {
 	return k.part, k.rep, nil
 }
 
-// layers returns the sheet's items by layer, layers in order of first appearance.
+// layers returns the drawing's items by layer, layers in order of first appearance.
 func (k *classifier) layers() ([]string, map[string][]Item) {
 	var names []string
 	by := map[string][]Item{}

@@ -285,8 +285,8 @@ func unitScale(u pantograph.Units) float64 {
 
 // ReadDXF reads an ASCII DXF drawing (R12 or later) into loose segments in millimetres.
 // Entities it does not draw (text, dimensions, hatches, points, ...) are counted in
-// Sheet.Skipped.
-func ReadDXF(file string, src []byte, opts Options) (*Sheet, error) {
+// Drawing.Skipped.
+func ReadDXF(file string, src []byte, opts Options) (*Drawing, error) {
 	gs, err := scanDXF(file, src)
 	if err != nil {
 		return nil, err
@@ -299,11 +299,11 @@ func ReadDXF(file string, src []byte, opts Options) (*Sheet, error) {
 	if err != nil {
 		return nil, &Error{File: file, Line: f.insunitLine, Msg: err.Error()}
 	}
-	sh := &Sheet{File: file, Units: units, UnitsNote: note}
+	sh := &Drawing{File: file, Units: units, UnitsNote: note}
 	if !f.eofSeen {
 		sh.warnf("the file ends without 0 EOF: it may have been cut short")
 	}
-	r := &dxfReader{file: file, f: f, sheet: sh, tol: opts.chordTol()}
+	r := &dxfReader{file: file, f: f, found: sh, tol: opts.chordTol()}
 	if err := r.entities(f.entities, scaling(k, k), ""); err != nil {
 		return nil, err
 	}

@@ -20,7 +20,7 @@ const maxBlockDepth = 16
 type dxfReader struct {
 	file  string
 	f     *dxfFile
-	sheet *Sheet
+	found *Drawing
 	tol   float64 // chord tolerance in mm
 	stack []string
 	uses  int        // block uses so far, bounded by maxSegments so that empty blocks cannot loop on
@@ -72,11 +72,11 @@ func (r *dxfReader) entity(e dxfEntity, m affine, inherit string) error {
 	case "INSERT":
 		return r.insert(e, ocs, layer)
 	}
-	r.sheet.skip(e.kind)
+	r.found.skip(e.kind)
 	return nil
 }
 
-// emitter adds segments of one entity to the sheet.
+// emitter adds segments of one entity to the drawing found.
 type emitter struct {
 	r     *dxfReader
 	e     dxfEntity
@@ -105,7 +105,7 @@ func (o emitter) addMapped(s geom.Segment) error {
 	if s.A == s.B && !s.IsArc() {
 		return nil
 	}
-	if len(o.r.sheet.Items) >= maxSegments {
+	if len(o.r.found.Items) >= maxSegments {
 		return o.errf("more than %d segments: this drawing is far larger than any part panto makes", maxSegments)
 	}
 	it := Item{Seg: s, Layer: o.layer, Line: o.e.line, What: o.e.kind}
@@ -113,7 +113,7 @@ func (o emitter) addMapped(s geom.Segment) error {
 		// The user finds an inserted block by its INSERT, not by the block's definition.
 		it.Line, it.What = v.line, fmt.Sprintf("%s of INSERT %q", o.e.kind, v.str(2))
 	}
-	o.r.sheet.Items = append(o.r.sheet.Items, it)
+	o.r.found.Items = append(o.r.found.Items, it)
 	return nil
 }
 
@@ -236,7 +236,7 @@ func (r *dxfReader) polyline(em emitter, m affine) error {
 		return err
 	}
 	if int(flags)&(16|64) != 0 {
-		r.sheet.skip("POLYLINE mesh")
+		r.found.skip("POLYLINE mesh")
 		return nil
 	}
 	var vs []vertex
@@ -327,7 +327,7 @@ func (r *dxfReader) insert(e dxfEntity, m affine, layer string) error {
 		return em.errf("block %q is inserted at scale 0", name)
 	}
 	if math.Abs(math.Abs(sc[0])-math.Abs(sc[1])) > similarityTol*math.Abs(sc[0]) {
-		r.sheet.warnf("line %d: block %q is stretched unequally (%g × %g): its arcs became chords within %g mm",
+		r.found.warnf("line %d: block %q is stretched unequally (%g × %g): its arcs became chords within %g mm",
 			e.line, name, sc[0], sc[1], r.tol)
 	}
 	r.stack = append(r.stack, name)

@@ -18,8 +18,8 @@ type Item struct {
 	Name  string // the SVG element's id, which names the feature it becomes; "" when none
 }
 
-// Sheet is what a reader found in a file: the segments and what it had to decide or skip.
-type Sheet struct {
+// Drawing is what a reader found in a file: the segments and what it had to decide or skip.
+type Drawing struct {
 	File      string
 	Items     []Item
 	Units     pantograph.Units // the drawing's units, for the part file and messages
@@ -28,11 +28,11 @@ type Sheet struct {
 	Skipped   map[string]int // entities or elements not read, by name
 }
 
-func (s *Sheet) warnf(format string, args ...any) {
+func (s *Drawing) warnf(format string, args ...any) {
 	s.Warnings = append(s.Warnings, fmt.Sprintf(format, args...))
 }
 
-func (s *Sheet) skip(name string) {
+func (s *Drawing) skip(name string) {
 	if s.Skipped == nil {
 		s.Skipped = map[string]int{}
 	}
@@ -40,7 +40,7 @@ func (s *Sheet) skip(name string) {
 }
 
 // skippedText lists the skipped names with counts, sorted, e.g. "3 TEXT, 1 DIMENSION".
-func (s *Sheet) skippedText() string {
+func (s *Drawing) skippedText() string {
 	names := make([]string, 0, len(s.Skipped))
 	for n := range s.Skipped {
 		names = append(names, n)

@@ -30,7 +30,7 @@ func ReadFile(path string, opts Options) (pantograph.Part, Report, error) {
 
 // Read reads a drawing from src; name, used in messages, chooses the format by its extension.
 func Read(name string, src []byte, opts Options) (pantograph.Part, Report, error) {
-	var sh *Sheet
+	var sh *Drawing
 	var err error
 	switch ext := strings.ToLower(filepath.Ext(name)); ext {
 	case ".dxf":

@@ -22,7 +22,7 @@ func (r *dxfReader) spline(em emitter, m affine) error {
 		if len(fit) < 2 {
 			return em.errf("has neither control points (group 10) nor fit points (group 11)")
 		}
-		r.sheet.warnf("line %d: SPLINE has fit points only: drawn through them with straight lines", em.e.line)
+		r.found.warnf("line %d: SPLINE has fit points only: drawn through them with straight lines", em.e.line)
 		vs := make([]vertex, len(fit))
 		for i, p := range fit {
 			vs[i] = vertex{p: p}

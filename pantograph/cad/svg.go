@@ -28,7 +28,7 @@ type svgReader struct {
 	file  string
 	dec   *xml.Decoder
 	src   []byte
-	sheet *Sheet
+	found *Drawing
 	opts  Options
 	stack []svgFrame
 }
@@ -36,9 +36,9 @@ type svgReader struct {
 // ReadSVG reads an SVG drawing into loose segments in millimetres, +Y up. The size comes from
 // the root's width and height (with units) and viewBox; a file sized in px or not at all is
 // read at 96 px per inch with a warning, unless opts.Units says what a user unit is.
-func ReadSVG(file string, src []byte, opts Options) (*Sheet, error) {
+func ReadSVG(file string, src []byte, opts Options) (*Drawing, error) {
 	r := &svgReader{file: file, dec: xml.NewDecoder(bytes.NewReader(src)), src: src,
-		sheet: &Sheet{File: file}, opts: opts}
+		found: &Drawing{File: file}, opts: opts}
 	r.dec.Strict = true
 	r.dec.CharsetReader = func(_ string, in io.Reader) (io.Reader, error) { return in, nil }
 	rootSeen := false
@@ -75,7 +75,7 @@ func ReadSVG(file string, src []byte, opts Options) (*Sheet, error) {
 	if !rootSeen {
 		return nil, &Error{File: file, Msg: "no <svg> element: is this an SVG file?"}
 	}
-	return r.sheet, nil
+	return r.found, nil
 }
 
 // lineAt returns the line of byte offset off.
@@ -129,7 +129,7 @@ func (r *svgReader) start(t xml.StartElement, line int) error {
 		if hidden(t) {
 			name += " hidden"
 		}
-		r.sheet.skip("<" + name + ">")
+		r.found.skip("<" + name + ">")
 		f.skip = true
 		r.stack = append(r.stack, f)
 		return nil
@@ -182,16 +182,16 @@ func (r *svgReader) shape(t xml.StartElement, f svgFrame, line int) error {
 		return &Error{File: r.file, Line: line, What: what, Msg: err.Error()}
 	}
 	if segs == nil && !drawnShapes[name] && name != "g" && name != "svg" && name != "a" {
-		r.sheet.skip("<" + name + ">")
+		r.found.skip("<" + name + ">")
 	}
 	for _, s := range segs {
 		if !s.A.IsFinite() || !s.B.IsFinite() || !s.Center.IsFinite() {
 			return &Error{File: r.file, Line: line, What: what, Msg: "a coordinate is too large to be a drawing of a part"}
 		}
-		if len(r.sheet.Items) >= maxSegments {
+		if len(r.found.Items) >= maxSegments {
 			return &Error{File: r.file, Line: line, What: what, Msg: fmt.Sprintf("more than %d segments: far larger than any part", maxSegments)}
 		}
-		r.sheet.Items = append(r.sheet.Items, Item{Seg: s, Layer: f.layer, Line: line, What: what, Name: attr(t, "id")})
+		r.found.Items = append(r.found.Items, Item{Seg: s, Layer: f.layer, Line: line, What: what, Name: attr(t, "id")})
 	}
 	return nil
 }
@@ -344,49 +344,49 @@ func (r *svgReader) root(t xml.StartElement, line int) error {
 }
 
 // userToMM works out millimetres per user unit from width, height and viewBox, and flips y so
-// that +Y points up with the bottom edge of the sheet at y = 0.
+// that +Y points up with the bottom edge of the page at y = 0.
 func (r *svgReader) userToMM(t xml.StartElement, line int) (affine, error) {
 	sz, err := readRootSize(t)
 	if err != nil {
 		return affine{}, &Error{File: r.file, Line: line, What: "<svg>", Msg: err.Error()}
 	}
 	kx, ky := sz.scales()
-	r.sheet.Units = pantograph.MM
+	r.found.Units = pantograph.MM
 	if sz.wu == "in" || sz.hu == "in" {
-		r.sheet.Units = pantograph.Inch
+		r.found.Units = pantograph.Inch
 	}
 	switch physical := isPhysical(sz.wu) || isPhysical(sz.hu); {
 	case r.opts.Units != "" && !physical:
 		kx, ky = unitScale(r.opts.Units), unitScale(r.opts.Units)
-		r.sheet.UnitsNote = fmt.Sprintf("--units %s: one SVG user unit is 1 %s", r.opts.Units, r.opts.Units)
-		r.sheet.Units = r.opts.Units
+		r.found.UnitsNote = fmt.Sprintf("--units %s: one SVG user unit is 1 %s", r.opts.Units, r.opts.Units)
+		r.found.Units = r.opts.Units
 	case r.opts.Units != "":
-		r.sheet.UnitsNote = fmt.Sprintf("size from width/height (--units %s sets only the part file's units)", r.opts.Units)
-		r.sheet.Units = r.opts.Units
+		r.found.UnitsNote = fmt.Sprintf("size from width/height (--units %s sets only the part file's units)", r.opts.Units)
+		r.found.Units = r.opts.Units
 	case physical:
-		r.sheet.UnitsNote = fmt.Sprintf("width %q, height %q: %.6g mm per user unit", attr(t, "width"), attr(t, "height"), kx)
+		r.found.UnitsNote = fmt.Sprintf("width %q, height %q: %.6g mm per user unit", attr(t, "width"), attr(t, "height"), kx)
 	default:
-		r.sheet.UnitsNote = "no physical size (width and height in px or absent): assumed 96 px per inch"
-		r.sheet.warnf("%s:%d: <svg> gives no physical size; read at 96 px per inch (%.6g mm per px). "+
+		r.found.UnitsNote = "no physical size (width and height in px or absent): assumed 96 px per inch"
+		r.found.warnf("%s:%d: <svg> gives no physical size; read at 96 px per inch (%.6g mm per px). "+
 			"Check the part's size, or give --units mm if one unit of the drawing is a millimetre",
 			r.file, line, 25.4/96)
 	}
 	if math.Abs(kx-ky) > 1e-9*math.Max(kx, ky) {
 		// preserveAspectRatio's default (xMidYMid meet) scales uniformly by the smaller factor.
 		kx, ky = math.Min(kx, ky), math.Min(kx, ky)
-		r.sheet.warnf("%s:%d: <svg> width/height and viewBox differ in proportion: read at the smaller scale, %.6g mm per unit", r.file, line, kx)
+		r.found.warnf("%s:%d: <svg> width/height and viewBox differ in proportion: read at the smaller scale, %.6g mm per unit", r.file, line, kx)
 	}
-	sheetH := 0.0
+	pageH := 0.0
 	if sz.vb != nil {
-		sheetH = sz.vb[3] * ky
+		pageH = sz.vb[3] * ky
 	} else if sz.h > 0 {
-		sheetH = sz.h * unitMM(sz.hu)
+		pageH = sz.h * unitMM(sz.hu)
 	}
 	ox, oy := 0.0, 0.0
 	if sz.vb != nil {
 		ox, oy = sz.vb[0], sz.vb[1]
 	}
-	return translation(-ox, -oy).then(scaling(kx, -ky)).then(translation(0, sheetH)), nil
+	return translation(-ox, -oy).then(scaling(kx, -ky)).then(translation(0, pageH)), nil
 }
 
 // rootSize is what the <svg> element says of its size.
