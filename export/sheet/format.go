@@ -22,7 +22,7 @@ func num(v float64) string { return numfmt.MM(v) }
 func reading(r pantograph.Reading) string {
 	s := r.String()
 	if r.Remainder >= 0.005 {
-		s += fmt.Sprintf(" (%.4f mm)", r.AtPart)
+		s += " (" + numfmt.Fixed(r.AtPart, 4) + " mm)"
 	}
 	return s
 }
