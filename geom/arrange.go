@@ -55,7 +55,7 @@ func splitPieces(groups [][]Segment) []piece {
 		sub = cutAt(sub[:0], p.seg, cuts[first[i]:first[i+1]])
 		for _, s := range sub {
 			s.A, s.B = snap.point(s.A), snap.point(s.B)
-			if s.A.Near(s.B) && !(s.IsArc() && math.Abs(s.Sweep) > math.Pi) {
+			if s.A.Near(s.B) && !s.IsFullCircle() {
 				continue
 			}
 			out = append(out, piece{s, p.src})

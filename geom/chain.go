@@ -161,7 +161,7 @@ func continues(s, t Segment) (Segment, bool) {
 		}
 	case s.IsArc() && t.IsArc():
 		if s.Center.Dist(t.Center) <= snapTol && math.Abs(s.Radius()-t.Radius()) <= snapTol &&
-			s.Sweep*t.Sweep > 0 && math.Abs(s.Sweep+t.Sweep) <= 2*math.Pi+1e-12 {
+			s.Sweep*t.Sweep > 0 && !beyondFullTurn(s.Sweep+t.Sweep) {
 			return Segment{A: s.A, B: t.B, Center: s.Center, Sweep: s.Sweep + t.Sweep}, true
 		}
 	}

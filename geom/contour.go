@@ -87,8 +87,8 @@ func (s Segment) inCircularSegment(p Vec) bool {
 	if p.Dist(s.Center) >= r {
 		return false
 	}
-	if s.A.Near(s.B) {
-		return true // full circle: the whole disc
+	if s.IsFullCircle() {
+		return true // the whole disc; the chord is a point and has no side
 	}
 	side := s.B.Sub(s.A).Cross(p.Sub(s.A))
 	return side*s.Sweep < 0
@@ -162,7 +162,7 @@ func (s Segment) validate() error {
 		return ErrNotFinite
 	case s.Length() <= pointTol:
 		return ErrZeroLength
-	case math.Abs(s.Sweep) > 2*math.Pi+1e-12:
+	case beyondFullTurn(s.Sweep):
 		return fmt.Errorf("arc sweeps %.6g°, more than a full turn: %w", s.Sweep*180/math.Pi, ErrBadArc)
 	case s.IsArc() && math.Abs(s.B.Dist(s.Center)-s.Radius()) > 1e-7*math.Max(1, s.Radius()):
 		return ErrBadArc

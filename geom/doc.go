@@ -17,9 +17,11 @@
 // point B, and for arcs the Center and the signed Sweep in radians (positive counter-clockwise,
 // negative clockwise, 0 < |Sweep| ≤ 2π). A line has Sweep == 0 and its Center is unused. The
 // radius of an arc is |A − Center|; B lies on the same circle at angle(A) + Sweep. A full
-// circle is one arc with A == B and |Sweep| == 2π. The end points are stored, not recomputed, so
-// contours join exactly where their author joined them; Center is kept because offsetting an arc
-// keeps its centre and only changes its radius.
+// circle is one arc with A == B and |Sweep| == 2π; Segment.IsFullCircle tells one by its ends
+// (within pointTol, on an arc of more than half a turn), and sweeps are compared with a whole
+// turn within fullTurnTol (1e-12 rad, which moves an end by pointTol on a radius of a metre).
+// The end points are stored, not recomputed, so contours join exactly where their author joined
+// them; Center is kept because offsetting an arc keeps its centre and only changes its radius.
 //
 // # Contours and regions
 //

@@ -38,13 +38,14 @@ func JoinLoose(segs []Segment, tol float64) LooseResult {
 	g := newLooseGraph(tol)
 	var res LooseResult
 	for i, s := range segs {
-		if isFullCircle(s) {
+		if s.IsFullCircle() {
 			res.Chains = append(res.Chains, LooseChain{Segs: []Segment{s}, Src: []int{i}, Closed: true})
 			continue
 		}
 		a, b := g.node(s.A), g.node(s.B)
 		if a == b && s.IsArc() && math.Abs(s.Sweep) > math.Pi {
-			// An arc whose ends meet within tol is a circle drawn with a slip of the pen.
+			// An arc whose ends meet within tol is a circle drawn with a slip of the pen: the
+			// rule of IsFullCircle, with the join tolerance in place of pointTol.
 			c := ArcFrom(s.A, s.Center, math.Copysign(2*math.Pi, s.Sweep))
 			res.Chains = append(res.Chains, LooseChain{Segs: []Segment{c}, Src: []int{i}, Closed: true})
 			continue
@@ -61,11 +62,6 @@ func JoinLoose(segs []Segment, tol float64) LooseResult {
 	}
 	res.Chains = append(res.Chains, g.walkAll(segs)...)
 	return res
-}
-
-// isFullCircle reports whether s is a whole circle, which closes on itself.
-func isFullCircle(s Segment) bool {
-	return s.IsArc() && math.Abs(math.Abs(s.Sweep)-2*math.Pi) < 1e-9 && s.A.Near(s.B)
 }
 
 // looseGraph has the distinct end points as nodes and the segments as edges.

@@ -146,8 +146,8 @@ func offsetSegment(s Segment, d float64) (Segment, bool) {
 		Center: s.Center,
 		Sweep:  s.Sweep,
 	}
-	if s.A.Near(s.B) {
-		o.B = o.A // a full circle stays exactly closed
+	if s.IsFullCircle() {
+		o.B = o.A // stays exactly closed
 	}
 	return o, o.Length() > pointTol
 }

@@ -16,10 +16,11 @@ type Segment struct {
 func Line(a, b Vec) Segment { return Segment{A: a, B: b} }
 
 // ArcFrom returns the arc that starts at a, turns about center by sweep radians
-// (counter-clockwise when positive) and ends where that rotation lands.
+// (counter-clockwise when positive) and ends where that rotation lands; a sweep of a whole
+// turn (within fullTurnTol) ends exactly at a, so the circle closes.
 func ArcFrom(a, center Vec, sweep float64) Segment {
 	b := center.Add(a.Sub(center).Rotate(sweep))
-	if math.Abs(math.Abs(sweep)-2*math.Pi) < 1e-15 {
+	if isFullTurn(sweep) {
 		b = a
 	}
 	return Segment{A: a, B: b, Center: center, Sweep: sweep}
@@ -134,7 +135,7 @@ func (s Segment) Bounds() Box {
 
 // sweepContains reports whether direction a (radians) from the centre lies within the arc.
 func (s Segment) sweepContains(a float64) bool {
-	if math.Abs(s.Sweep) >= 2*math.Pi {
+	if coversFullTurn(s.Sweep) {
 		return true
 	}
 	d := normAngle(a - s.StartAngle())
@@ -154,7 +155,7 @@ func (s Segment) angleParam(a float64) (float64, bool) {
 	t := d / math.Abs(s.Sweep)
 	if t > 1 {
 		// Directions just before the start count as the start.
-		if 2*math.Pi-d < 1e-12 {
+		if 2*math.Pi-d < fullTurnTol {
 			return 0, true
 		}
 		return t, false
