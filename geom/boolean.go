@@ -146,27 +146,14 @@ func boxesOf(boxes []Box, idx []int) []Box {
 // increasing order and the groups ordered by their first index, so the output is the same
 // from run to run.
 func clusters(boxes []Box) [][]int {
-	parent := make([]int, len(boxes))
-	for i := range parent {
-		parent[i] = i
-	}
-	find := func(i int) int {
-		for parent[i] != i {
-			parent[i] = parent[parent[i]]
-			i = parent[i]
-		}
-		return i
-	}
+	u := newUnionFind(len(boxes))
 	for _, p := range boxPairs(boxes) {
-		ri, rj := find(p[0]), find(p[1])
-		if ri != rj {
-			parent[max(ri, rj)] = min(ri, rj)
-		}
+		u.union(p[0], p[1])
 	}
 	at := map[int]int{}
 	var groups [][]int
 	for i := range boxes {
-		r := find(i)
+		r := u.find(i)
 		k, ok := at[r]
 		if !ok {
 			k = len(groups)

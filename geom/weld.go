@@ -40,25 +40,17 @@ func weld(rs []Region) []Region {
 // union–find; the earliest point added represents its group.
 type welder struct {
 	pts    []Vec
-	parent []int
+	groups *unionFind
 	cells  map[[2]int64][]int
 	index  map[Vec]int
 }
 
 func newWelder() *welder {
-	return &welder{cells: map[[2]int64][]int{}, index: map[Vec]int{}}
+	return &welder{groups: newUnionFind(0), cells: map[[2]int64][]int{}, index: map[Vec]int{}}
 }
 
 func (w *welder) cell(p Vec) [2]int64 {
 	return [2]int64{int64(math.Floor(p.X / weldTol)), int64(math.Floor(p.Y / weldTol))}
-}
-
-func (w *welder) find(i int) int {
-	for w.parent[i] != i {
-		w.parent[i] = w.parent[w.parent[i]]
-		i = w.parent[i]
-	}
-	return i
 }
 
 // add records p and joins it to every earlier point within weldTol.
@@ -66,15 +58,14 @@ func (w *welder) add(p Vec) {
 	if _, ok := w.index[p]; ok {
 		return
 	}
-	i := len(w.pts)
-	w.pts, w.parent, w.index[p] = append(w.pts, p), append(w.parent, i), i
+	i := w.groups.add()
+	w.pts, w.index[p] = append(w.pts, p), i
 	c := w.cell(p)
 	for dx := int64(-1); dx <= 1; dx++ {
 		for dy := int64(-1); dy <= 1; dy++ {
 			for _, j := range w.cells[[2]int64{c[0] + dx, c[1] + dy}] {
 				if w.pts[j].Dist(p) <= weldTol {
-					ri, rj := w.find(i), w.find(j)
-					w.parent[max(ri, rj)] = min(ri, rj)
+					w.groups.union(i, j)
 				}
 			}
 		}
@@ -88,7 +79,7 @@ func (w *welder) at(p Vec) Vec {
 	if !ok {
 		return p
 	}
-	return w.pts[w.find(i)]
+	return w.pts[w.groups.find(i)]
 }
 
 // contour returns c with its end points welded; each segment ends where the next starts.
