@@ -47,12 +47,12 @@ func splitPieces(groups [][]Segment) []piece {
 			found = append(found, pairCrossing{int32(i), int32(j), x})
 		}
 	})
-	first, cuts := cutsBySegment(len(segs), found)
+	cuts := cutsBySegment(len(segs), found)
 	snap := newSnapper(len(segs) + len(found))
 	out := make([]piece, 0, len(segs)+2*len(found))
 	var sub []Segment
 	for i, p := range segs {
-		sub = cutAt(sub[:0], p.seg, cuts[first[i]:first[i+1]])
+		sub = cutAt(sub[:0], p.seg, cuts.row(i))
 		for _, s := range sub {
 			s.A, s.B = snap.point(s.A), snap.point(s.B)
 			if s.A.Near(s.B) && !s.IsFullCircle() {
@@ -70,27 +70,20 @@ type pairCrossing struct {
 	x    crossing
 }
 
-// cutsBySegment sorts the crossings into the cuts of each of n segments: segment i's are
-// cuts[first[i]:first[i+1]], in the order the crossings were found. Two passes over one
-// array, where a slice per segment grown by appends cost an allocation per crossing.
-func cutsBySegment(n int, found []pairCrossing) (first []int32, cuts []crossingAt) {
-	first = make([]int32, n+1)
+// cutsBySegment sorts the crossings into the cuts of each of n segments: row i holds segment
+// i's, in the order the crossings were found.
+func cutsBySegment(n int, found []pairCrossing) rows[crossingAt] {
+	cuts := newRows[crossingAt](n)
 	for _, f := range found {
-		first[f.i+1]++
-		first[f.j+1]++
+		cuts.count(int(f.i))
+		cuts.count(int(f.j))
 	}
-	for k := 1; k <= n; k++ {
-		first[k] += first[k-1]
-	}
-	fill := append([]int32(nil), first[:n]...)
-	cuts = make([]crossingAt, 2*len(found))
+	cuts.allot()
 	for _, f := range found {
-		cuts[fill[f.i]] = crossingAt{f.x.ta, f.x.at}
-		fill[f.i]++
-		cuts[fill[f.j]] = crossingAt{f.x.tb, f.x.at}
-		fill[f.j]++
+		cuts.place(int(f.i), crossingAt{f.x.ta, f.x.at})
+		cuts.place(int(f.j), crossingAt{f.x.tb, f.x.at})
 	}
-	return first, cuts
+	return cuts
 }
 
 // crossingAt is a point where a segment is to be cut, at parameter t.

@@ -211,7 +211,7 @@ func dropSlivers(loops []Contour) []Contour {
 // tell which inputs cover each side of a piece.
 type arrangement struct {
 	pieces []piece           // ordered by src
-	first  []int             // input j's pieces are pieces[first[j]:first[j+1]]
+	inputs rows[piece]       // row j holds input j's pieces, in pieces itself
 	na     int               // inputs below na belong to the first operand
 	boxes  []Box             // each input's bounds
 	grid   boxGrid           // finds the inputs whose bounds may hold a point
@@ -223,18 +223,12 @@ func newArrangement(ps []piece, na int, boxes []Box) *arrangement {
 	if !sort.SliceIsSorted(ps, bySrc) {
 		sort.SliceStable(ps, bySrc)
 	}
-	first := make([]int, len(boxes)+1)
-	for _, p := range ps {
-		first[p.src+1]++
-	}
-	for j := 1; j < len(first); j++ {
-		first[j] += first[j-1]
-	}
+	inputs := sortedRows(ps, len(boxes), func(p piece) int { return p.src })
 	wide := make([]Box, len(boxes))
 	for j, b := range boxes {
 		wide[j] = b.Expand(coincideTol)
 	}
-	return &arrangement{pieces: ps, first: first, na: na, boxes: wide, grid: newBoxGrid(wide),
+	return &arrangement{pieces: ps, inputs: inputs, na: na, boxes: wide, grid: newBoxGrid(wide),
 		locs: make([]*windingLocator, len(boxes))}
 }
 
@@ -318,11 +312,12 @@ func (ar *arrangement) twinDir(s Segment, key [2]Vec, m Vec, q int) int {
 // locator returns the winding locator of input j, building it the first time.
 func (ar *arrangement) locator(j int) *windingLocator {
 	if ar.locs[j] == nil {
-		segs := make([]Segment, 0, ar.first[j+1]-ar.first[j])
-		for _, p := range ar.pieces[ar.first[j]:ar.first[j+1]] {
+		own := ar.inputs.row(j)
+		segs := make([]Segment, 0, len(own))
+		for _, p := range own {
 			segs = append(segs, p.seg)
 		}
-		ar.locs[j] = newWindingLocator(segs, ar.first[j])
+		ar.locs[j] = newWindingLocator(segs, ar.inputs.first(j))
 	}
 	return ar.locs[j]
 }

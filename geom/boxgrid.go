@@ -11,8 +11,7 @@ type boxGrid struct {
 	min    Vec
 	cell   float64
 	nx, ny int
-	start  []int32
-	items  []int32
+	cells  rows[int32] // the boxes reaching into each cell, row y·nx + x
 }
 
 // newBoxGrid sizes cells like a typical (median) box, but no smaller than needed to keep the
@@ -31,17 +30,10 @@ func newBoxGrid(boxes []Box) boxGrid {
 	cell = math.Max(cell, math.Max(sz.X, sz.Y)/4096)
 	g := boxGrid{min: all.Min, cell: cell}
 	g.nx, g.ny = int(sz.X/cell)+1, int(sz.Y/cell)+1
-	g.start = make([]int32, g.nx*g.ny+1)
-	g.each(boxes, func(c, _ int) { g.start[c+1]++ })
-	for c := 1; c < len(g.start); c++ {
-		g.start[c] += g.start[c-1]
-	}
-	g.items = make([]int32, g.start[len(g.start)-1])
-	fill := append([]int32(nil), g.start...)
-	g.each(boxes, func(c, i int) {
-		g.items[fill[c]] = int32(i)
-		fill[c]++
-	})
+	g.cells = newRows[int32](g.nx * g.ny)
+	g.each(boxes, func(c, _ int) { g.cells.count(c) })
+	g.cells.allot()
+	g.each(boxes, func(c, i int) { g.cells.place(c, int32(i)) })
 	return g
 }
 
@@ -67,6 +59,5 @@ func (g *boxGrid) cellOf(p Vec) (int, int) {
 // at returns the boxes that may hold p.
 func (g *boxGrid) at(p Vec) []int32 {
 	x, y := g.cellOf(p)
-	c := y*g.nx + x
-	return g.items[g.start[c]:g.start[c+1]]
+	return g.cells.row(y*g.nx + x)
 }

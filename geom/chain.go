@@ -9,8 +9,8 @@ import "math"
 // exactly, as splitPieces leaves them.
 func chainLoops(ps []piece) (loops []Contour, srcs [][]int, open int) {
 	startID, endID, nodes := nodeIDs(ps)
-	from := byNode(startID, nodes) // pieces leaving each point, in index order
-	at := make([]int32, nodes)     // point → position in chain of the piece that leaves it, or −1
+	from := indexRows(startID, nodes) // pieces leaving each point, in index order
+	at := make([]int32, nodes)        // point → position in chain of the piece that leaves it, or −1
 	for k := range at {
 		at[k] = -1
 	}
@@ -40,7 +40,7 @@ func chainLoops(ps []piece) (loops []Contour, srcs [][]int, open int) {
 			}
 			cur = -1
 			if end >= 0 {
-				cur = leftmost(ps, from(end), used, ps[chain[len(chain)-1]].seg)
+				cur = leftmost(ps, from.row(int(end)), used, ps[chain[len(chain)-1]].seg)
 			}
 			if cur < 0 {
 				open += len(chain)

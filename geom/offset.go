@@ -323,7 +323,7 @@ func pruneDangling(ps []piece) []piece {
 		outs[from[i]]++
 		ins[to[i]]++
 	}
-	leaving, arriving := byNode(from, len(ids)), byNode(to, len(ids))
+	leaving, arriving := indexRows(from, len(ids)), indexRows(to, len(ids))
 	var queue []int32
 	for i := range ps {
 		if outs[to[i]] == 0 || ins[from[i]] == 0 {
@@ -339,10 +339,10 @@ func pruneDangling(ps []piece) []piece {
 		}
 		gone[i] = true
 		if outs[from[i]]--; outs[from[i]] == 0 {
-			queue = append(queue, arriving(from[i])...)
+			queue = append(queue, arriving.row(int(from[i]))...)
 		}
 		if ins[to[i]]--; ins[to[i]] == 0 {
-			queue = append(queue, leaving(to[i])...)
+			queue = append(queue, leaving.row(int(to[i]))...)
 		}
 	}
 	kept := ps[:0] // in place: kept never passes i
@@ -352,25 +352,6 @@ func pruneDangling(ps []piece) []piece {
 		}
 	}
 	return kept
-}
-
-// byNode groups item indices by the node each names (node[i] for item i) and returns a lookup
-// of the items at a node, in compressed rows: no map, two allocations.
-func byNode(node []int32, nodes int) func(int32) []int32 {
-	first := make([]int32, nodes+1)
-	for _, n := range node {
-		first[n+1]++
-	}
-	for k := 1; k <= nodes; k++ {
-		first[k] += first[k-1]
-	}
-	items := make([]int32, len(node))
-	fill := append([]int32(nil), first[:nodes]...)
-	for i, n := range node {
-		items[fill[n]] = int32(i)
-		fill[n]++
-	}
-	return func(n int32) []int32 { return items[first[n]:first[n+1]] }
 }
 
 // segIndexLeaf is how many consecutive segments share one leaf box of a segIndex: enough to

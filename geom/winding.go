@@ -11,10 +11,9 @@ import (
 // While it casts, it also looks for a part that runs through the point, which the caller
 // judges (see probe).
 type windingLocator struct {
-	parts []monotonePart
-	y0, h float64
-	start []int32 // strip k holds parts items[start[k]:start[k+1]], rightmost first
-	items []int32
+	parts  []monotonePart
+	y0, h  float64
+	strips rows[int32] // the parts reaching into each strip, rightmost first
 }
 
 // monotonePart is a line, or an arc within one quarter of its circle between the top and the
@@ -116,34 +115,28 @@ func (l *windingLocator) fillStrips() {
 	if !(l.h > 0) {
 		l.h = 1
 	}
-	l.start = make([]int32, k+1)
+	l.strips = newRows[int32](k)
 	for _, p := range l.parts {
 		for s := l.strip(p.lo - coincideTol); s <= l.strip(p.hi+coincideTol); s++ {
-			l.start[s+1]++
+			l.strips.count(s)
 		}
 	}
-	for s := 1; s <= k; s++ {
-		l.start[s] += l.start[s-1]
-	}
-	l.items = make([]int32, l.start[k])
-	fill := append([]int32(nil), l.start[:k]...)
+	l.strips.allot()
 	for i, p := range l.parts {
 		for s := l.strip(p.lo - coincideTol); s <= l.strip(p.hi+coincideTol); s++ {
-			l.items[fill[s]] = int32(i)
-			fill[s]++
+			l.strips.place(s, int32(i))
 		}
 	}
 	for s := 0; s < k; s++ {
-		its := l.items[l.start[s]:l.start[s+1]]
+		its := l.strips.row(s)
 		sort.Slice(its, func(a, b int) bool { return l.parts[its[a]].xmax > l.parts[its[b]].xmax })
 	}
 }
 
 // strip returns the strip holding height y, clamped to the strips there are.
 func (l *windingLocator) strip(y float64) int {
-	k := len(l.start) - 1
 	s := int((y - l.y0) / l.h)
-	return max(0, min(k-1, s))
+	return max(0, min(l.strips.len()-1, s))
 }
 
 // probe returns how many times the boundaries wind counter-clockwise around p, and the first
@@ -157,7 +150,7 @@ func (l *windingLocator) probe(p Vec, along func(piece int) int) (w, on int) {
 		return 0, 0
 	}
 	s := l.strip(p.Y)
-	for _, i := range l.items[l.start[s]:l.start[s+1]] {
+	for _, i := range l.strips.row(s) {
 		m := &l.parts[i]
 		if m.xmax < p.X-coincideTol {
 			break // the rest lie wholly left of p
