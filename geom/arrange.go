@@ -2,7 +2,6 @@ package geom
 
 import (
 	"cmp"
-	"math"
 	"slices"
 )
 
@@ -137,13 +136,10 @@ func eachBoxPair(boxes []Box, f func(i, j int)) {
 	}
 }
 
-// snapper merges points closer than snapTol into one seen earlier, using a hash grid so that
-// it costs O(1) a point. The points of a cell are a linked list through pts, so a cell costs
-// no slice of its own.
+// snapper merges each point closer than snapTol to one seen earlier into that one (the first
+// the grid offers), at O(1) a point.
 type snapper struct {
-	cells map[[2]int64]int32 // cell → index in pts of its latest point + 1
-	pts   []Vec
-	next  []int32 // index in pts of the cell's point before this one + 1; 0 ends the list
+	grid *pointGrid
 }
 
 // snapCell is the side of a snapper's grid cell. A point needs to look into a neighbouring
@@ -152,42 +148,19 @@ type snapper struct {
 const snapCell = 16 * snapTol
 
 // newSnapper returns an empty snapper with room for about n points.
-func newSnapper(n int) *snapper {
-	return &snapper{cells: make(map[[2]int64]int32, n), pts: make([]Vec, 0, n), next: make([]int32, 0, n)}
-}
+func newSnapper(n int) *snapper { return &snapper{grid: newPointGrid(snapCell, snapTol, n)} }
 
 // point returns the representative of p: an earlier point within snapTol, or p itself.
 func (s *snapper) point(p Vec) Vec {
-	fx, fy := math.Floor(p.X/snapCell), math.Floor(p.Y/snapCell)
-	cx, cy := int64(fx), int64(fy)
-	x0, x1 := snapReach(p.X, fx)
-	y0, y1 := snapReach(p.Y, fy)
-	for dx := x0; dx <= x1; dx++ {
-		for dy := y0; dy <= y1; dy++ {
-			for k := s.cells[[2]int64{cx + dx, cy + dy}]; k > 0; k = s.next[k-1] {
-				if q := s.pts[k-1]; q.Dist(p) <= snapTol {
-					return q
-				}
-			}
+	q, found := p, false
+	s.grid.near(p, func(i int) bool {
+		if c := s.grid.point(i); c.Dist(p) <= snapTol {
+			q, found = c, true
 		}
+		return !found
+	})
+	if !found {
+		s.grid.add(p)
 	}
-	c := [2]int64{cx, cy}
-	s.pts = append(s.pts, p)
-	s.next = append(s.next, s.cells[c])
-	s.cells[c] = int32(len(s.pts))
-	return p
-}
-
-// snapReach returns which neighbouring cells along one axis (−1, 0, +1) can hold a point within
-// snapTol of coordinate v, whose cell starts at f·snapCell. It errs towards looking: a margin
-// of a tenth of snapTol covers the rounding of the division.
-func snapReach(v, f float64) (lo, hi int64) {
-	off := v - f*snapCell
-	if off < 1.1*snapTol {
-		lo = -1
-	}
-	if snapCell-off < 1.1*snapTol {
-		hi = 1
-	}
-	return lo, hi
+	return q
 }

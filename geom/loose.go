@@ -67,9 +67,8 @@ func JoinLoose(segs []Segment, tol float64) LooseResult {
 // looseGraph has the distinct end points as nodes and the segments as edges.
 type looseGraph struct {
 	tol   float64
-	cells map[[2]int64][]int // grid cell → nodes whose point lies in it
-	pts   []Vec              // node → its point (the first end point seen there)
-	at    [][]int            // node → edges meeting it
+	nodes *pointGrid // node n's point (the first end point seen there) is point n
+	at    [][]int    // node → edges meeting it
 	edges []looseEdge
 }
 
@@ -80,38 +79,31 @@ type looseEdge struct {
 }
 
 func newLooseGraph(tol float64) *looseGraph {
-	return &looseGraph{tol: tol, cells: map[[2]int64][]int{}}
+	return &looseGraph{tol: tol, nodes: newPointGrid(tol, tol, 0)}
 }
 
-// cell returns the grid cell holding p. Coordinates beyond the int64 range share the end cells.
-func (g *looseGraph) cell(p Vec) [2]int64 {
-	f := func(x float64) int64 {
-		c := math.Floor(x / g.tol)
-		return int64(math.Max(-1<<62, math.Min(1<<62, c)))
-	}
-	return [2]int64{f(p.X), f(p.Y)}
-}
-
-// node returns the node within tol of p, making one when there is none.
+// node returns the node nearest to p within tol, making one when there is none. Of nodes
+// exactly as near it makes one fixed choice, so that a drawing always joins the same way: the
+// newest of the last cell the grid offers one from.
 func (g *looseGraph) node(p Vec) int {
-	c := g.cell(p)
 	best, bestD := -1, g.tol
-	for dx := int64(-1); dx <= 1; dx++ {
-		for dy := int64(-1); dy <= 1; dy++ {
-			for _, n := range g.cells[[2]int64{c[0] + dx, c[1] + dy}] {
-				if d := g.pts[n].Dist(p); d <= bestD {
-					best, bestD = n, d
-				}
-			}
+	g.nodes.near(p, func(n int) bool {
+		d := g.nodes.point(n).Dist(p)
+		if d < bestD || d == bestD && (best < 0 || g.otherCell(n, best)) {
+			best, bestD = n, d
 		}
-	}
+		return true
+	})
 	if best >= 0 {
 		return best
 	}
-	g.pts = append(g.pts, p)
 	g.at = append(g.at, nil)
-	g.cells[c] = append(g.cells[c], len(g.pts)-1)
-	return len(g.pts) - 1
+	return g.nodes.add(p)
+}
+
+// otherCell reports whether nodes m and n lie in different cells of the grid.
+func (g *looseGraph) otherCell(m, n int) bool {
+	return g.nodes.cellOf(g.nodes.point(m)) != g.nodes.cellOf(g.nodes.point(n))
 }
 
 // duplicate reports whether an edge already joins nodes a and b along the same curve as s.
@@ -139,14 +131,14 @@ func (g *looseGraph) addEdge(src, a, b int) {
 // long as it can be, then the loops that remain.
 func (g *looseGraph) walkAll(segs []Segment) []LooseChain {
 	var out []LooseChain
-	for n := range g.pts {
+	for n := range g.at {
 		if len(g.at[n])%2 == 1 {
 			for g.free(n) >= 0 {
 				out = append(out, g.walk(segs, n))
 			}
 		}
 	}
-	for n := range g.pts {
+	for n := range g.at {
 		for g.free(n) >= 0 {
 			out = append(out, g.walk(segs, n))
 		}
@@ -178,7 +170,7 @@ func (g *looseGraph) walk(segs []Segment, start int) LooseChain {
 		if ed.a != n {
 			s, next = s.Reverse(), ed.a
 		}
-		c.Segs = append(c.Segs, snapEnds(s, g.pts[n], g.pts[next]))
+		c.Segs = append(c.Segs, snapEnds(s, g.nodes.point(n), g.nodes.point(next)))
 		c.Src = append(c.Src, ed.src)
 		n = next
 		if n == start {

@@ -36,21 +36,18 @@ func weld(rs []Region) []Region {
 	return out
 }
 
-// welder merges points within weldTol of each other, transitively, through a hash grid and
-// union–find; the earliest point added represents its group.
+// welder merges points within weldTol of each other, transitively: the grid finds the points
+// near each new one and union–find keeps the groups, which the earliest point added
+// represents. Points are numbered alike in both, in the order added.
 type welder struct {
-	pts    []Vec
+	grid   *pointGrid
 	groups *unionFind
-	cells  map[[2]int64][]int
 	index  map[Vec]int
 }
 
 func newWelder() *welder {
-	return &welder{groups: newUnionFind(0), cells: map[[2]int64][]int{}, index: map[Vec]int{}}
-}
-
-func (w *welder) cell(p Vec) [2]int64 {
-	return [2]int64{int64(math.Floor(p.X / weldTol)), int64(math.Floor(p.Y / weldTol))}
+	return &welder{grid: newPointGrid(weldTol, weldTol, 0), groups: newUnionFind(0),
+		index: map[Vec]int{}}
 }
 
 // add records p and joins it to every earlier point within weldTol.
@@ -59,18 +56,14 @@ func (w *welder) add(p Vec) {
 		return
 	}
 	i := w.groups.add()
-	w.pts, w.index[p] = append(w.pts, p), i
-	c := w.cell(p)
-	for dx := int64(-1); dx <= 1; dx++ {
-		for dy := int64(-1); dy <= 1; dy++ {
-			for _, j := range w.cells[[2]int64{c[0] + dx, c[1] + dy}] {
-				if w.pts[j].Dist(p) <= weldTol {
-					w.groups.union(i, j)
-				}
-			}
+	w.index[p] = i
+	w.grid.near(p, func(j int) bool {
+		if w.grid.point(j).Dist(p) <= weldTol {
+			w.groups.union(i, j)
 		}
-	}
-	w.cells[c] = append(w.cells[c], i)
+		return true
+	})
+	w.grid.add(p)
 }
 
 // at returns the point that represents p's group, or p when it was never added.
@@ -79,7 +72,7 @@ func (w *welder) at(p Vec) Vec {
 	if !ok {
 		return p
 	}
-	return w.pts[w.groups.find(i)]
+	return w.grid.point(w.groups.find(i))
 }
 
 // contour returns c with its end points welded; each segment ends where the next starts.
