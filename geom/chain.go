@@ -10,7 +10,8 @@ import "math"
 func chainLoops(ps []piece) (loops []Contour, srcs [][]int, open int) {
 	startID, endID, nodes := nodeIDs(ps)
 	from := indexRows(startID, nodes) // pieces leaving each point, in index order
-	at := make([]int32, nodes)        // point → position in chain of the piece that leaves it, or −1
+	// at maps a point to the position in chain of the piece that leaves it, or −1.
+	at := make([]int32, nodes)
 	for k := range at {
 		at[k] = -1
 	}

@@ -24,7 +24,8 @@ func TestIsFullCircle(t *testing.T) {
 		{"1e-7 rad past a turn", ArcFrom(V(1, 0), o, 2*math.Pi+1e-7), false},
 		// Derived: on radius 1e-4 a gap of 1e-6 rad leaves the ends 1e-10 apart: closed.
 		{"small circle 1e-6 rad short", ArcFrom(V(1e-4, 0), o, 2*math.Pi-1e-6), true},
-		{"ends made one point, sweep short", Segment{A: V(1, 0), B: V(1, 0), Sweep: 2*math.Pi - 1e-7}, true},
+		{"ends made one point, sweep short",
+			Segment{A: V(1, 0), B: V(1, 0), Sweep: 2*math.Pi - 1e-7}, true},
 		{"half circle", Arc(o, 1, 0, math.Pi), false},
 		{"three quarters", Arc(o, 1, 0, 1.5*math.Pi), false},
 		// Derived: a sweep of 1e-10 on radius 1 has its ends 1e-10 apart but turns hardly at all.

@@ -59,7 +59,8 @@ func TestIndexRows(t *testing.T) {
 	}{
 		{"no keys", nil, 2, [][]int32{{}, {}}},
 		{"each its own", []int32{1, 0, 2}, 3, [][]int32{{1}, {0}, {2}}},
-		{"shared keys, increasing indices", []int32{2, 0, 2, 0, 1, 2}, 4, [][]int32{{1, 3}, {4}, {0, 2, 5}, {}}},
+		{"shared keys, increasing indices", []int32{2, 0, 2, 0, 1, 2}, 4,
+			[][]int32{{1, 3}, {4}, {0, 2, 5}, {}}},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
