@@ -30,14 +30,14 @@ func Check(p Part, o Options) []Problem {
 	ps = append(ps, checkNames(p)...)
 	good := []Feature{}
 	for _, f := range p.All() {
-		fs := checkFeature(f, p.Stock)
+		fs := checkFeature(f, p.Stock, p.Units)
 		ps = append(ps, fs...)
 		if !HasErrors(fs) {
 			good = append(good, f)
 		}
 	}
 	if len(good) > 0 && good[0].Kind == KindProfile {
-		es := elementsOf(good[1:])
+		es := elementsOf(good[1:], p.Units)
 		ps = append(ps, checkPlacement(good[0], es, o)...)
 		ps = append(ps, checkPairs(es, o)...)
 	}
@@ -49,7 +49,7 @@ func Check(p Part, o Options) []Problem {
 func sound(p Part) []Feature {
 	var good []Feature
 	for _, f := range p.All() {
-		if !HasErrors(checkFeature(f, p.Stock)) {
+		if !HasErrors(checkFeature(f, p.Stock, p.Units)) {
 			good = append(good, f)
 		}
 	}
@@ -82,7 +82,7 @@ func checkStock(p Part) []Problem {
 			Message: "stock thickness missing: give [stock] thickness so depths can be checked"}}
 	case !(t > 0) || math.IsInf(t, 0):
 		return []Problem{{Severity: Error, Label: "[stock]", Where: where,
-			Message: "stock thickness must be greater than 0, got " + num(t)}}
+			Message: "stock thickness must be greater than 0, got " + p.Units.Length(t)}}
 	}
 	return nil
 }
@@ -102,30 +102,31 @@ func checkNames(p Part) []Problem {
 	return ps
 }
 
-// checkFeature looks at one feature on its own: sizes, depth and outline.
-func checkFeature(f Feature, s Stock) []Problem {
+// checkFeature looks at one feature on its own: sizes, depth and outline; lengths in its
+// messages are in u.
+func checkFeature(f Feature, s Stock, u Units) []Problem {
 	var ps []Problem
 	switch f.Kind {
 	case KindHoles:
 		if !(f.Diameter > 0) || math.IsInf(f.Diameter, 0) {
-			ps = append(ps, problemf(Error, f, "diameter must be greater than 0, got %s", num(f.Diameter)).on(f, "diameter"))
+			ps = append(ps, problemf(Error, f, "diameter must be greater than 0, got %s", u.Length(f.Diameter)).on(f, "diameter"))
 		}
 		if len(f.Centers) == 0 {
 			ps = append(ps, problemf(Error, f, "no hole positions given").on(f, "at"))
 		}
 	case KindSlot:
 		if !(f.Width > 0) || math.IsInf(f.Width, 0) {
-			ps = append(ps, problemf(Error, f, "width must be greater than 0, got %s", num(f.Width)).on(f, "width"))
+			ps = append(ps, problemf(Error, f, "width must be greater than 0, got %s", u.Length(f.Width)).on(f, "width"))
 		}
 	case KindGroove:
 		if f.Width < 0 || math.IsNaN(f.Width) || math.IsInf(f.Width, 0) {
-			ps = append(ps, problemf(Error, f, "width must be 0 (as wide as the cutter) or more, got %s", num(f.Width)).on(f, "width"))
+			ps = append(ps, problemf(Error, f, "width must be 0 (as wide as the cutter) or more, got %s", u.Length(f.Width)).on(f, "width"))
 		}
 		if len(f.Path) < 2 {
 			ps = append(ps, problemf(Error, f, "a groove needs at least 2 points, got %d", len(f.Path)).on(f, "points"))
 		}
 	}
-	ps = append(ps, checkDepth(f, s)...)
+	ps = append(ps, checkDepth(f, s, u)...)
 	if HasErrors(ps) {
 		return ps
 	}
@@ -133,7 +134,7 @@ func checkFeature(f Feature, s Stock) []Problem {
 }
 
 // checkDepth looks at a feature's depth against the stock.
-func checkDepth(f Feature, s Stock) []Problem {
+func checkDepth(f Feature, s Stock, u Units) []Problem {
 	d := f.Depth
 	switch {
 	case f.Kind == KindProfile || f.Kind == KindCutout:
@@ -146,15 +147,15 @@ func checkDepth(f Feature, s Stock) []Problem {
 		}
 		return nil
 	case !(d.MM > 0) || math.IsInf(d.MM, 0):
-		return []Problem{problemf(Error, f, "depth must be greater than 0, got %s", num(d.MM)).on(f, "depth")}
+		return []Problem{problemf(Error, f, "depth must be greater than 0, got %s", u.Length(d.MM)).on(f, "depth")}
 	case s.Thickness <= 0:
 		return nil // reported with the stock
 	case d.MM > s.Thickness:
 		return []Problem{amountf(Error, f, d.MM-s.Thickness,
-			"depth %s is deeper than the stock (%s) by %s", num(d.MM), mm(s.Thickness), mm(d.MM-s.Thickness)).on(f, "depth")}
+			"depth %s is deeper than the stock (%s) by %s", u.Length(d.MM), u.Length(s.Thickness), u.Length(d.MM-s.Thickness)).on(f, "depth")}
 	case d.MM == s.Thickness:
 		return []Problem{problemf(Warning, f,
-			`depth %s is the whole stock thickness: it breaks through; write depth = "through" if that is meant`, mm(d.MM)).on(f, "depth")}
+			`depth %s is the whole stock thickness: it breaks through; write depth = "through" if that is meant`, u.Length(d.MM)).on(f, "depth")}
 	}
 	return nil
 }

@@ -79,7 +79,7 @@ func TestCheck(t *testing.T) {
 		{"slot breaks the edge", plate(slotFeature("s", geom.V(3, 9), geom.V(6, 9), 3, through)),
 			Error, "the slot breaks through the profile edge: it reaches 0.5 mm beyond it", 0.5}, // derived: 9 + 1.5 − 10
 		{"pocket deeper than stock", plate(rectFeature(KindPocket, "seat", geom.V(2, 2), geom.V(3, 2), 0, Depth{MM: 1.5})),
-			Error, "depth 1.5 is deeper than the stock (1 mm) by 0.5 mm", 0.5}, // derived: 1.5 − 1
+			Error, "depth 1.5 mm is deeper than the stock (1 mm) by 0.5 mm", 0.5}, // derived: 1.5 − 1
 		{"pocket as deep as stock", plate(rectFeature(KindPocket, "seat", geom.V(2, 2), geom.V(3, 2), 0, Depth{MM: 1})),
 			Warning, "the whole stock thickness", math.NaN()},
 		{"through pocket", plate(rectFeature(KindPocket, "seat", geom.V(2, 2), geom.V(3, 2), 0, through)),

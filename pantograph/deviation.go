@@ -45,10 +45,10 @@ const fitTol = 1e-7
 
 // openingFit checks openings or recesses rs, all cut from inside with a cutter of diameter d.
 // Holes of one milled feature share their fate, so only the first that deviates is described.
-func openingFit(pf PlannedFeature, rs []geom.Region, d float64) (Status, []Problem) {
+func openingFit(pf PlannedFeature, rs []geom.Region, d float64, u Units) (Status, []Problem) {
 	st, ws, more := StatusOK, []Problem(nil), 0
 	for _, r := range rs {
-		s, w := openingFitOne(pf, r, d)
+		s, w := openingFitOne(pf, r, d, u)
 		st = worse(st, s)
 		switch {
 		case len(w) == 0:
@@ -65,30 +65,30 @@ func openingFit(pf PlannedFeature, rs []geom.Region, d float64) (Status, []Probl
 }
 
 // openingFitOne checks one region cut from inside.
-func openingFitOne(pf PlannedFeature, r geom.Region, d float64) (Status, []Problem) {
+func openingFitOne(pf PlannedFeature, r geom.Region, d float64, u Units) (Status, []Problem) {
 	rc := d/2 - fitTol
 	centre := r.Offset(-rc).Regions
 	if len(centre) == 0 {
 		amount, width := d, "too small"
 		if g, ok := r.NarrowestWidth(); ok {
-			amount, width = d-g.Width, mm(g.Width)+" wide at its narrowest"
+			amount, width = d-g.Width, u.Length(g.Width)+" wide at its narrowest"
 		}
 		return StatusLost, []Problem{amountWarn(pf, amount,
-			"%s, smaller than the Ø%s cutter: the cutter cannot go in, nothing of it is cut", width, num(d))}
+			"%s, smaller than the Ø%s cutter: the cutter cannot go in, nothing of it is cut", width, u.Length(d))}
 	}
 	cut := geom.OffsetRegions(centre, rc)
 	var ws []Problem
 	if len(centre) > 1 {
-		ws = append(ws, neckWarning(pf, r, d, len(centre)))
+		ws = append(ws, neckWarning(pf, r, d, len(centre), u))
 	}
 	if c, ok := r.SharpestConvexCorner(); ok && c.Radius < rc-deviationTol {
-		ws = append(ws, cornerWarning(pf, c, d, cut)...)
+		ws = append(ws, cornerWarning(pf, c, d, cut, u)...)
 	}
-	return areaWarnings(pf, ws, r.Area()-areaOf(cut), r.Perimeter())
+	return areaWarnings(pf, ws, r.Area()-areaOf(cut), r.Perimeter(), u)
 }
 
 // profileFit checks the profile, cut round from outside with a cutter of diameter d.
-func profileFit(pf PlannedFeature, r geom.Region, d float64) (Status, []Problem) {
+func profileFit(pf PlannedFeature, r geom.Region, d float64, u Units) (Status, []Problem) {
 	rc := d/2 - fitTol
 	made := geom.OffsetRegions(r.Offset(rc).Regions, -rc)
 	var ws []Problem
@@ -96,30 +96,30 @@ func profileFit(pf PlannedFeature, r geom.Region, d float64) (Status, []Problem)
 		at := g.A.Lerp(g.B, 0.5)
 		ws = append(ws, amountWarn(pf, d-g.Width,
 			"the notch at %s is %s wide, narrower than the Ø%s cutter: it is not cut to the bottom",
-			pt(at.X, at.Y), mm(g.Width), num(d)))
+			u.Point(at.X, at.Y), u.Length(g.Width), u.Length(d)))
 	}
 	if c, ok := r.SharpestConcaveCorner(); ok && c.Radius < rc-deviationTol {
-		ws = append(ws, cornerWarning(pf, c, d, made)...)
+		ws = append(ws, cornerWarning(pf, c, d, made, u)...)
 	}
-	return areaWarnings(pf, ws, areaOf(made)-r.Area(), r.Perimeter())
+	return areaWarnings(pf, ws, areaOf(made)-r.Area(), r.Perimeter(), u)
 }
 
 // neckWarning describes an opening the cutter can only cut as n separate pieces.
-func neckWarning(pf PlannedFeature, r geom.Region, d float64, n int) Problem {
+func neckWarning(pf PlannedFeature, r geom.Region, d float64, n int, u Units) Problem {
 	g, ok := r.NarrowestWidth()
 	if !ok {
-		return warnf(pf, "the Ø%s cutter cannot pass its narrowest place: it comes out as %d separate openings", num(d), n)
+		return warnf(pf, "the Ø%s cutter cannot pass its narrowest place: it comes out as %d separate openings", u.Length(d), n)
 	}
 	at := g.A.Lerp(g.B, 0.5)
 	return amountWarn(pf, d-g.Width,
 		"it narrows to %s at %s, less than the Ø%s cutter: it comes out as %d separate openings with material left between them",
-		mm(g.Width), pt(at.X, at.Y), num(d), n)
+		u.Length(g.Width), u.Point(at.X, at.Y), u.Length(d), n)
 }
 
 // cornerWarning describes the material a cutter of diameter d leaves in corner c, as the
 // distance from the drawn corner to the edge the cutter makes (cut). For a sharp corner of
 // inside angle θ that is r(1/sin(θ/2) − 1); r(√2 − 1) at 90°.
-func cornerWarning(pf PlannedFeature, c geom.Corner, d float64, cut []geom.Region) []Problem {
+func cornerWarning(pf PlannedFeature, c geom.Corner, d float64, cut []geom.Region, u Units) []Problem {
 	left := math.Inf(1)
 	for _, r := range cut {
 		for _, k := range r.Contours() {
@@ -131,26 +131,23 @@ func cornerWarning(pf PlannedFeature, c geom.Corner, d float64, cut []geom.Regio
 	}
 	drawn := "sharp"
 	if c.Radius > 0 {
-		drawn = "R" + num(c.Radius)
+		drawn = "R" + u.Length(c.Radius)
 	}
 	return []Problem{amountWarn(pf, left,
 		"the inside corner at %s is drawn %s; the Ø%s cutter rounds it to R%s and leaves %s of material in the corner",
-		pt(c.At.X, c.At.Y), drawn, num(d), num(d/2), mm(left))}
+		u.Point(c.At.X, c.At.Y), drawn, u.Length(d), u.Length(d/2), u.Length(left))}
 }
 
 // areaWarnings adds the area a cutter leaves (uncut, mm²) to the warnings about a feature and
 // returns its status. Differences within deviationTol of the outline all round count as none.
-func areaWarnings(pf PlannedFeature, ws []Problem, uncut, perimeter float64) (Status, []Problem) {
+func areaWarnings(pf PlannedFeature, ws []Problem, uncut, perimeter float64, u Units) (Status, []Problem) {
 	if uncut <= deviationTol*perimeter {
 		if len(ws) == 0 {
 			return StatusOK, nil
 		}
 		return StatusDeviates, ws
 	}
-	a := fmt.Sprintf("%s mm² in all stays uncut", num(uncut))
-	if uncut < 0.001 {
-		a = fmt.Sprintf("%.2g mm² in all stays uncut", uncut)
-	}
+	a := u.Area(uncut) + " in all stays uncut"
 	if len(ws) == 0 {
 		return StatusDeviates, []Problem{warnf(pf, "the cutter cannot reach every part of it: %s", a)}
 	}

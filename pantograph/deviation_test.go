@@ -8,10 +8,10 @@ import (
 )
 
 func TestCutterLimits(t *testing.T) {
-	notched := Part{Name: "notched", Stock: Stock{Thickness: 1}, Profile: Feature{Kind: KindProfile,
+	notched := Part{Name: "notched", Stock: Stock{Material: "brass", Thickness: 1}, Profile: Feature{Kind: KindProfile,
 		Region: geom.NewRegion(geom.Polygon(geom.V(0, 0), geom.V(20, 0), geom.V(20, 10), geom.V(10.5, 10),
 			geom.V(10.5, 6), geom.V(10.2, 6), geom.V(10.2, 10), geom.V(0, 10)))}}
-	ell := Part{Name: "ell", Stock: Stock{Thickness: 1}, Profile: Feature{Kind: KindProfile,
+	ell := Part{Name: "ell", Stock: Stock{Material: "brass", Thickness: 1}, Profile: Feature{Kind: KindProfile,
 		Region: geom.NewRegion(geom.Polygon(geom.V(0, 0), geom.V(20, 0), geom.V(20, 5), geom.V(5, 5), geom.V(5, 10), geom.V(0, 10)))}}
 	tri := Feature{Name: "three", Kind: KindCutout, Depth: through, Region: geom.NewRegion(geom.Polygon(
 		geom.V(5, 2), geom.V(11, 2), geom.V(8, 2+3*math.Sqrt(3))))}

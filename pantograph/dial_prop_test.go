@@ -56,7 +56,7 @@ func TestPecksProperty(t *testing.T) {
 	rng := rand.New(rand.NewSource(seed))
 	for i := 0; i < 500; i++ {
 		d, total := 0.1+rng.Float64()*3, 0.05+rng.Float64()*10
-		ps := pecks(total, d)
+		ps := pecks(total, d, 0)
 		first := peckShare * d
 		if d < microTool {
 			first = microFirstShare * d

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 	"strings"
+
+	"panto/geom"
 )
 
 // Machine is a pantograph mill with the tools and the printer that go with it, as a machine
@@ -15,6 +17,7 @@ type Machine struct {
 	Units  Units  // the units the machine file was written in; lengths here are already mm
 
 	Ratio     RatioRange // the reductions the linkage can be set to
+	Pivot     Pivot      // where the linkage's fixed pivot lies; "" means PivotEnd
 	CopyTable Travel     // how far the copy table moves, in template mm
 	Fixing    Fixing     // how a template plate is bolted to the copy table
 	WorkTable Travel     // how far the work table moves, in part mm
@@ -25,6 +28,9 @@ type Machine struct {
 	Cutters []Cutter
 	Drills  []Drill
 	Printer Printer
+	// Materials are the machine file's own rows of the speed table ([[stock_material]]),
+	// added to the built-in ones or replacing them by name; see MaterialsFor.
+	Materials []StockMaterial
 }
 
 // RatioRange is the set of ratios R (template size : part size) a linkage can be set to: any
@@ -82,6 +88,28 @@ func (r RatioRange) String() string {
 		return fmt.Sprintf("%g:1 to %g:1, any value between", r.Min, r.Max)
 	}
 	return "not stated"
+}
+
+// Pivot is where a pantograph's fixed pivot lies. It decides how the copy the cutter makes lies
+// against the template the stylus traces: with the pivot at the end of the arms, stylus and
+// cutter move the same way (the copy is similar and similarly placed); with the pivot between
+// them they move opposite ways, so the copy is turned 180° and the template must be turned too
+// for the part to come out the right way round.
+type Pivot string
+
+// The pivot positions.
+const (
+	PivotEnd     Pivot = "end"     // fixed pivot at the end: a stylus move +m moves the cutter +m/R
+	PivotBetween Pivot = "between" // fixed pivot between stylus and cutter: +m moves it −m/R
+)
+
+// CopyTurn returns how far the linkage turns the copy against the template: 180° for a pivot
+// between stylus and cutter, none otherwise.
+func (p Pivot) CopyTurn() geom.Angle {
+	if p == PivotBetween {
+		return geom.Degrees(180)
+	}
+	return 0
 }
 
 // Travel is how far a table moves along X and Y, in mm; 0 means not stated.
@@ -155,7 +183,8 @@ type Dial struct {
 	Units     Units   // what the screw is made in: mm or in
 	Backlash  float64 // lost motion on reversing, in Units
 	// Reversed is true when turning the dial the way its numbers count up moves the table
-	// toward −X (or −Y, or up for depth) rather than +X (+Y, down).
+	// toward −X (to the operator's left), −Y (toward the operator) or up, rather than +X
+	// (right), +Y (away) or down into the work. The machine file says it with count_up.
 	Reversed bool
 }
 

@@ -40,7 +40,7 @@ func TestOversizeStylus(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			part := Part{Name: "tab", Stock: Stock{Thickness: 1},
+			part := Part{Name: "tab", Stock: Stock{Material: "brass", Thickness: 1},
 				Profile: Feature{Name: "profile", Kind: KindProfile, Region: tc.profile, Depth: Depth{Through: true}}}
 			p, err := PlanPart(part, Setup{Ratio: 10, Cutter: 0.5, Stylus: tc.stylus}, nil)
 			if err != nil {

@@ -21,6 +21,7 @@ type element struct {
 	at      geom.Vec // hole centre, or start of a groove stretch
 	r       float64
 	key     string // the key its line is written on ("at[2]", "points[0]"), "" for the table
+	u       Units  // the part's units, for messages
 }
 
 // problem builds a problem about the element, placed on its own line.
@@ -32,9 +33,9 @@ func (e element) problem(sev Severity, amount float64, format string, args ...an
 func (e element) name() string {
 	switch {
 	case e.hole:
-		return "hole at " + pt(e.at.X, e.at.Y)
+		return "hole at " + e.u.Point(e.at.X, e.at.Y)
 	case e.f.Kind == KindGroove:
-		return "the groove near " + pt(e.at.X, e.at.Y)
+		return "the groove near " + e.u.Point(e.at.X, e.at.Y)
 	}
 	return "the " + kindWords[e.f.Kind]
 }
@@ -43,9 +44,9 @@ func (e element) name() string {
 func (e element) fullName() string {
 	switch {
 	case e.hole && e.f.Name != "":
-		return fmt.Sprintf("hole at %s of %s", pt(e.at.X, e.at.Y), e.f.Label())
+		return fmt.Sprintf("hole at %s of %s", e.u.Point(e.at.X, e.at.Y), e.f.Label())
 	case e.f.Kind == KindGroove:
-		return fmt.Sprintf("%s near %s", e.f.Label(), pt(e.at.X, e.at.Y))
+		return fmt.Sprintf("%s near %s", e.f.Label(), e.u.Point(e.at.X, e.at.Y))
 	}
 	return e.f.Label()
 }
@@ -54,11 +55,12 @@ func (e element) fullName() string {
 var kindWords = map[Kind]string{KindProfile: "profile", KindCutout: "cut-out", KindPocket: "pocket",
 	KindHoles: "holes", KindSlot: "slot", KindGroove: "groove"}
 
-// elementsOf breaks features into elements.
-func elementsOf(fs []Feature) []element {
+// elementsOf breaks features into elements, whose messages give lengths in u.
+func elementsOf(fs []Feature, u Units) []element {
 	es := outlinesOf(fs)
 	for i := range es {
 		es[i].box = es[i].outline.Bounds()
+		es[i].u = u
 	}
 	return es
 }
@@ -97,15 +99,15 @@ func checkPlacement(profile Feature, es []element, o Options) []Problem {
 		switch rel {
 		case apart, aInsideB:
 			ps = append(ps, e.problem(Error, amount, "%s lies outside the profile, %s from its edge",
-				e.name(), mm(amount)))
+				e.name(), e.u.Length(amount)))
 		case crossing:
 			out := reach(e.outline, edge, false)
 			ps = append(ps, e.problem(Error, out, "%s breaks through the profile edge: it reaches %s beyond it",
-				e.name(), mm(out)))
+				e.name(), e.u.Length(out)))
 		case bInsideA:
 			if amount < o.MinWall && e.f.Kind != KindGroove {
 				ps = append(ps, e.problem(Warning, amount, "%s leaves a wall of only %s to the profile edge (less than %s)",
-					e.name(), mm(amount), mm(o.MinWall)))
+					e.name(), e.u.Length(amount), e.u.Length(o.MinWall)))
 			}
 		}
 	}
@@ -167,7 +169,7 @@ func pairProblem(a, b element, o Options) (Problem, bool) {
 	}
 	if amount < o.MinWall && a.f.Kind != KindGroove && b.f.Kind != KindGroove {
 		return b.problem(Warning, amount, "%s leaves a wall of only %s to %s (less than %s)",
-			b.name(), mm(amount), a.fullName(), mm(o.MinWall)), true
+			b.name(), b.u.Length(amount), a.fullName(), b.u.Length(o.MinWall)), true
 	}
 	return Problem{}, false
 }
@@ -194,7 +196,7 @@ func crossProblem(a, b element, amount float64) Problem {
 	if a.f.Opening() && b.f.Opening() || a.hole && b.hole {
 		sev = Error
 	}
-	verb := fmt.Sprintf("overlaps %s by %s", a.fullName(), mm(amount))
+	verb := fmt.Sprintf("overlaps %s by %s", a.fullName(), b.u.Length(amount))
 	if amount <= touchTol {
 		verb = "touches " + a.fullName()
 	}

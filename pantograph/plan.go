@@ -18,9 +18,16 @@ import (
 type Plan struct {
 	Part   string // the part's name
 	Source string // the part file, for messages
+	Units  Units  // the part's drawing units: what lengths at the part are said in
 	Stock  Stock
-	Setup  Setup    // as given, after validation: the ratio, tools and layout
-	Datum  geom.Vec // part frame: the point the dials are zeroed on, template origin
+	// Material is the speed-table row of the stock, which speeds and passes are worked from.
+	Material StockMaterial
+	Setup    Setup    // as given, after validation, with the template's turn settled (Rotated)
+	Datum    geom.Vec // part frame: the point the dials are zeroed on, template origin
+	// CopyTurn is how the machine's linkage turns the copy against the template: 180° for a
+	// pivot between stylus and cutter, else 0. It decides where a template point lies on the
+	// stock (see StockPoint); without a machine file it is 0.
+	CopyTurn geom.Angle
 
 	// Transform maps the part frame to the template frame: translate(−Datum), then FlipX when
 	// Setup.Mirror, then Setup.Rotate, then Scale(Setup.Ratio).
@@ -112,6 +119,15 @@ const (
 	StepEngrave StepKind = "engrave" // run along a groove
 )
 
+// StockPoint returns where template point t (template frame) lies on the stock, in part mm
+// from the datum, +X to the operator's right and +Y away: t scaled down by R and turned back
+// by the linkage's own turn of the copy. A template turn that only makes up for the linkage
+// (180° on a pivot between stylus and cutter) leaves the part lying on the stock as drawn; a
+// turn beyond it, or a mirror, turns or mirrors the part on the stock too.
+func (p Plan) StockPoint(t geom.Vec) geom.Vec {
+	return geom.Rotate(-p.CopyTurn).Apply(t.Mul(1 / p.Setup.Ratio))
+}
+
 // Lost returns the names of the features the cutter cannot make.
 func (p Plan) Lost() []string {
 	var out []string
@@ -155,6 +171,10 @@ func PlanPart(p Part, s Setup, m *Machine) (Plan, error) {
 	if err := s.Validate(); err != nil {
 		return Plan{}, err
 	}
+	mat, err := MaterialsFor(m).Resolve(p.Stock.Material)
+	if err != nil {
+		return Plan{}, err
+	}
 	probs := Check(p, DefaultOptions())
 	if HasErrors(probs) {
 		var errs PartErrors
@@ -165,9 +185,17 @@ func PlanPart(p Part, s Setup, m *Machine) (Plan, error) {
 		}
 		return Plan{}, errs
 	}
-	pl := planner{part: p, setup: s, machine: m, t: s.Transform(p.Datum)}
-	out := Plan{Part: p.Name, Source: p.Source, Stock: p.Stock, Setup: s, Datum: p.Datum,
-		Transform: pl.t}
+	var copyTurn geom.Angle
+	if m != nil {
+		copyTurn = m.Pivot.CopyTurn()
+	}
+	if !s.Rotated && s.Rotate == 0 {
+		s.Rotate = copyTurn
+	}
+	s.Rotated = true
+	pl := planner{part: p, setup: s, machine: m, t: s.Transform(p.Datum), u: p.Units}
+	out := Plan{Part: p.Name, Source: p.Source, Units: p.Units, Stock: p.Stock, Material: mat,
+		Setup: s, Datum: p.Datum, CopyTurn: copyTurn, Transform: pl.t}
 	out.Warnings = partWarnings(probs)
 	for _, f := range p.All() {
 		pf, ws := pl.plan(f)

@@ -31,9 +31,12 @@ type Setup struct {
 	// Mirror flips the template left for right (x → −x about the datum) before it is turned,
 	// for dies and punches and for linkages that invert the image.
 	Mirror bool
-	// Rotate turns the template counter-clockwise about the datum, after any mirror; 180°
-	// suits a linkage whose fixed pivot lies between stylus and cutter.
-	Rotate geom.Angle
+	// Rotate turns the template counter-clockwise about the datum, after any mirror. Left at 0
+	// with Rotated false, the template is turned as the machine's linkage needs: 180° for a
+	// pivot between stylus and cutter, which turns the copy (Pivot.CopyTurn), else not at all.
+	// Rotated true keeps a Rotate of 0 as meant.
+	Rotate  geom.Angle
+	Rotated bool
 	// AcceptLoss lets a plan with lost features count as done.
 	AcceptLoss bool
 	// MillHoles mills every hole larger than its cutter instead of drilling it.
@@ -115,6 +118,7 @@ func machineWarnings(p Plan, m *Machine) []Problem {
 		return nil
 	}
 	var ws []Problem
+	u := p.Units
 	if w, ok := ratioWarning(p.Setup.Ratio, m.Ratio); ok {
 		ws = append(ws, w)
 	}
@@ -123,8 +127,8 @@ func machineWarnings(p Plan, m *Machine) []Problem {
 	if t := m.CopyTable; t.X > 0 && size.X > t.X+sizeTol || t.Y > 0 && size.Y > t.Y+sizeTol {
 		over := math.Max(size.X-t.X, size.Y-t.Y)
 		ws = append(ws, Problem{Severity: Warning, Stops: true, Amount: over / p.Setup.Ratio, HasAmount: true,
-			Message: fmt.Sprintf("the template is %s x %s mm but the copy table travels only %s x %s mm: a ratio of about %s:1 or less fits",
-				num(size.X), num(size.Y), num(t.X), num(t.Y), num(fittingRatio(p.Setup.Ratio, size, t)))})
+			Message: fmt.Sprintf("the template is %s x %s but the copy table travels only %s x %s: a ratio of about %s:1 or less fits",
+				u.Number(size.X), u.Length(size.Y), u.Number(t.X), u.Length(t.Y), num(fittingRatio(p.Setup.Ratio, size, t)))})
 	}
 	if b := m.Printer.Bed; b.X > 0 && b.Y > 0 && !fits(size, b) {
 		ws = append(ws, Problem{Severity: Warning, Message: fmt.Sprintf(
@@ -162,12 +166,12 @@ func toolWarnings(p Plan, m *Machine) []Problem {
 		if len(m.Styli) > 0 && !styli[f.Stylus] && !ownsStylus(m.Styli, f.Stylus) {
 			styli[f.Stylus] = true
 			ws = append(ws, Problem{Severity: Warning, Message: fmt.Sprintf(
-				"the plan uses a Ø%s stylus, and the machine file lists none that size", num(f.Stylus))})
+				"the plan uses a Ø%s stylus, and the machine file lists none that size", p.Units.Length(f.Stylus))})
 		}
 		if f.Cutter > 0 && len(m.Cutters) > 0 && !cutters[f.Cutter] && !ownsCutter(m.Cutters, f.Cutter) {
 			cutters[f.Cutter] = true
 			ws = append(ws, Problem{Severity: Warning, Message: fmt.Sprintf(
-				"the plan uses a Ø%s cutter, and the machine file lists none that size", num(f.Cutter))})
+				"the plan uses a Ø%s cutter, and the machine file lists none that size", p.Units.Length(f.Cutter))})
 		}
 	}
 	return ws

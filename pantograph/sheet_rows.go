@@ -7,20 +7,28 @@ import (
 	"panto/geom"
 )
 
-// This file lays out the sheet's rows from the plan's steps and then reads every position and
-// depth on the machine's dials.
+// This file lays out the sheet's rows from the plan's steps: the datum, a tool change whenever
+// the tool changes, one row per drilled hole and one per traced or engraved feature, each with
+// its passes in whole divisions of the depth dial.
 
-// rows returns one row per step, one per hole for drilling, in working order.
+// rows returns one row per step, one per hole for drilling, and a tool change before the first
+// cut of every tool, in working order.
 func (b sheetBuilder) rows() []SheetRow {
 	var out []SheetRow
-	for _, st := range b.p.Steps {
-		switch st.What {
-		case StepDatum:
-			out = append(out, SheetRow{What: StepDatum, Where: b.at(geom.Vec{}),
-				Action: "put the stylus on the datum (in its seat, where the template has one); set each dial to its datum reading; touch the cutter on the top face and zero the depth dial"})
-		case StepDrill:
+	var current string // the tool in the spindle
+	for i, st := range b.p.Steps {
+		if st.What == StepDatum {
+			out = append(out, SheetRow{What: StepDatum, Where: b.at(geom.Vec{}), Action: DatumInstruction})
+			continue
+		}
+		f := b.p.Features[st.Feature]
+		if tool := b.toolKey(f); tool != current {
+			current = tool
+			out = append(out, b.toolChange(f, i))
+		}
+		if st.What == StepDrill {
 			out = append(out, b.drillRows(st)...)
-		default:
+		} else {
 			out = append(out, b.traceRow(st))
 		}
 	}
@@ -30,9 +38,62 @@ func (b sheetBuilder) rows() []SheetRow {
 	return out
 }
 
+// toolKey names the tool and stylus a feature is made with: a change of either is a tool
+// change.
+func (b sheetBuilder) toolKey(f PlannedFeature) string { return b.toolText(f) + " / " + b.stylusText(f) }
+
+// toolChange is the step that puts f's tool in the spindle before step i: which tool and
+// stylus, the speed, the feed guide and the depth rules of every feature it cuts until the
+// next change.
+func (b sheetBuilder) toolChange(f PlannedFeature, i int) SheetRow {
+	kind, d := toolOf(f)
+	r := SheetRow{What: StepToolChange, Tool: b.toolText(f), Stylus: b.stylusText(f),
+		Action: "fit the tool and set the spindle speed; touch the tool on the top face of the stock and zero the depth dial"}
+	_, material := b.ownedTool(kind, d)
+	sp := speedFor(b.m.Spindle, b.mat, material, d, kind)
+	r.RPM, r.SpeedNote = sp.RPM, sp.Note
+	flutes := 0
+	if c, ok := b.cutter(d); ok && kind != ToolDrill {
+		flutes = c.Flutes
+	}
+	if feed, rule, ok := feedGuide(d, sp.RPM, flutes, kind, b.u); ok {
+		r.Feed, r.FeedRule = feed, rule
+	}
+	r.Rules = b.rulesFrom(i)
+	return r
+}
+
+// rulesFrom lists the depth rules of the features cut from step i until the tool changes, each
+// once.
+func (b sheetBuilder) rulesFrom(i int) []string {
+	tool := b.toolKey(b.p.Features[b.p.Steps[i].Feature])
+	seen := map[string]bool{}
+	var out []string
+	for _, st := range b.p.Steps[i:] {
+		g := b.p.Features[st.Feature]
+		if b.toolKey(g) != tool {
+			break
+		}
+		if rule := b.ruleFor(g); !seen[rule] {
+			seen[rule] = true
+			out = append(out, rule)
+		}
+	}
+	return out
+}
+
+// ruleFor is the depth rule a feature is cut to, in words.
+func (b sheetBuilder) ruleFor(f PlannedFeature) string {
+	kind, d := toolOf(f)
+	if kind == ToolDrill {
+		return peckRule(d, b.u)
+	}
+	return millPassRule(kind, d, b.mat, b.u).Rule
+}
+
 // at returns a position at template point t.
 func (b sheetBuilder) at(t geom.Vec) *Position {
-	return &Position{Template: t, Part: t.Mul(1 / b.p.Setup.Ratio)}
+	return &Position{Template: t, Part: b.p.StockPoint(t)}
 }
 
 // drillRows gives a row for each seat of a drill step; the pecks go on the first.
@@ -50,14 +111,13 @@ func (b sheetBuilder) drillRows(st Step) []SheetRow {
 	var out []SheetRow
 	for i, seat := range seats {
 		r := SheetRow{Number: f.Number, Feature: f.Name, What: StepDrill, Tool: b.toolText(f),
-			Stylus: stylusText(f), Where: b.at(seat), Depth: total, Through: f.Depth.Through,
+			Stylus: b.stylusText(f), Where: b.at(seat), Depth: total, Through: f.Depth.Through,
 			Action: fmt.Sprintf("drill hole %d of %d", i+1, len(seats))}
 		if i == 0 {
-			r.Passes, r.PassRule = passes(pecks(total, d)), peckRule(d)
+			r.Passes = passes(pecks(total, d, b.depthDivision()))
 		} else {
-			r.PassRule = "pecks as hole 1"
+			r.PassNote = "pecks as hole 1"
 		}
-		b.speed(&r, d, ToolDrill)
 		out = append(out, r)
 	}
 	return out
@@ -66,24 +126,23 @@ func (b sheetBuilder) drillRows(st Step) []SheetRow {
 // traceRow gives the row of a milled or engraved feature, placed at where the stylus starts.
 func (b sheetBuilder) traceRow(st Step) SheetRow {
 	f := b.p.Features[st.Feature]
-	kind, action := ToolMill, "trace the edge all round, starting here"
-	if f.Kind == KindProfile {
+	kind, _ := toolOf(f)
+	action := "trace the edge all round, starting here"
+	switch {
+	case f.Kind == KindProfile:
 		action = "cut the outline all round, starting here; the part comes free on the last pass"
-	}
-	if st.What == StepEngrave {
-		kind, action = ToolEngrave, "engrave along the channel, starting here"
+	case kind == ToolEngrave:
+		action = "engrave along the channel, starting here"
 	}
 	dep := f.Depth
 	if f.Kind == KindProfile || f.Kind == KindCutout {
 		dep = Depth{Through: true}
 	}
 	total := b.settable(totalDepth(dep, b.p.Stock.Thickness, kind, f.Cutter), dep.Through)
-	rule := millPassRule(kind, f.Cutter, b.p.Stock.Material)
-	r := SheetRow{Number: f.Number, Feature: f.Name, What: st.What, Tool: b.toolText(f),
-		Stylus: stylusText(f), Where: b.at(startOf(f)), Depth: total, Through: dep.Through, Action: action,
-		Passes: passes(Passes(total, rule.StepDown)), PassRule: rule.Rule}
-	b.speed(&r, f.Cutter, kind)
-	return r
+	rule := millPassRule(kind, f.Cutter, b.mat, b.u)
+	return SheetRow{Number: f.Number, Feature: f.Name, What: st.What, Tool: b.toolText(f),
+		Stylus: b.stylusText(f), Where: b.at(startOf(f)), Depth: total, Through: dep.Through, Action: action,
+		Passes: passes(passDepths(total, rule.StepDown, b.depthDivision()))}
 }
 
 // startOf is where the stylus starts on a feature: a groove's first point, else the first
@@ -98,15 +157,23 @@ func startOf(f PlannedFeature) geom.Vec {
 	return f.TemplateBounds.Min
 }
 
+// depthDivision is one division of the depth dial in mm, or 0 when the dial is not stated.
+func (b sheetBuilder) depthDivision() float64 {
+	d := b.m.Dials.Depth
+	if !d.Stated() {
+		return 0
+	}
+	return d.Division() * d.unitMM()
+}
+
 // settable returns the depth of a through cut taken down to the next whole division of the
 // depth dial, so the last pass can be set: going a fraction of a division deeper through the
 // stock does no harm. A blind depth is kept as drawn, and so is any depth without a dial.
 func (b sheetBuilder) settable(total float64, through bool) float64 {
-	d := b.m.Dials.Depth
-	if !through || !d.Stated() {
+	div := b.depthDivision()
+	if !through || div == 0 {
 		return total
 	}
-	div := d.Division() * d.unitMM()
 	return math.Ceil(total/div-divisionSnap) * div
 }
 
@@ -119,141 +186,14 @@ func passes(depths []float64) []Pass {
 	return out
 }
 
-// speed fills in the spindle speed and feed guide of a row cut with a tool of kind and d mm.
-func (b sheetBuilder) speed(r *SheetRow, d float64, kind ToolKind) {
-	if !(d > 0) {
-		return
-	}
-	sp := speedFor(b.m.Spindle, b.p.Stock.Material, b.toolMaterial(d, kind), d, kind)
-	r.RPM, r.SpeedNote = sp.RPM, sp.Note
-	flutes := 0
-	if c, ok := b.cutter(d); ok && kind != ToolDrill {
-		flutes = c.Flutes
-	}
-	if feed, rule, ok := feedGuide(d, sp.RPM, flutes, kind); ok {
-		r.Feed, r.FeedRule = feed, rule
-	}
-}
-
-// axis is one dial with how its position is taken from a row and stored back.
-type axis struct {
-	name  string
-	dial  Dial
-	scale float64
-	get   func(*Position) float64
-	set   func(*Position, Reading)
-}
-
-// axes returns the four positioning dials.
-func (b sheetBuilder) axes() []axis {
-	ds := b.m.Dials
-	return []axis{
-		{"copy X", ds.CopyX, b.p.Setup.Ratio, func(p *Position) float64 { return p.Template.X }, func(p *Position, r Reading) { p.CopyX = r }},
-		{"copy Y", ds.CopyY, b.p.Setup.Ratio, func(p *Position) float64 { return p.Template.Y }, func(p *Position, r Reading) { p.CopyY = r }},
-		{"work X", ds.WorkX, 1, func(p *Position) float64 { return p.Part.X }, func(p *Position, r Reading) { p.WorkX = r }},
-		{"work Y", ds.WorkY, 1, func(p *Position) float64 { return p.Part.Y }, func(p *Position, r Reading) { p.WorkY = r }},
-	}
-}
-
-// readAll fills in every reading and back-off of rows and returns what each dial is set to.
-func (b sheetBuilder) readAll(rows []SheetRow) SheetDials {
-	ax := b.axes()
-	return SheetDials{CopyX: b.readAxis(ax[0], rows), CopyY: b.readAxis(ax[1], rows),
-		WorkX: b.readAxis(ax[2], rows), WorkY: b.readAxis(ax[3], rows), Depth: b.readDepth(rows)}
-}
-
-// readAxis reads one positioning dial along the rows, in order, with a back-off note on each
-// position that lies behind the one before.
-func (b sheetBuilder) readAxis(a axis, rows []SheetRow) DialInfo {
-	info := dialInfo(a.name, a.dial, a.scale)
-	if !info.Stated {
-		return info
-	}
-	var counts []float64
-	for _, r := range rows {
-		counts = append(counts, a.dial.Count(a.get(r.Where)))
-	}
-	// Every reading, and every wind-back below one (the datum's own included), stays positive.
-	lows := []float64{-a.dial.BackOff()}
-	for _, c := range counts {
-		lows = append(lows, c-a.dial.BackOff())
-	}
-	info.DatumTurns = a.dial.DatumTurns(lows)
-	shift := float64(info.DatumTurns) * a.dial.Pitch
-	for i := range counts {
-		counts[i] += shift
-	}
-	moves := a.dial.approach(shift, counts)
-	for i, r := range rows {
-		a.set(r.Where, a.dial.Read(counts[i], a.scale))
-		if moves[i].Reversal {
-			r.Where.BackOff = append(r.Where.BackOff, fmt.Sprintf("%s: wind back to %s, then come up",
-				a.name, a.dial.Read(moves[i].BackTo, a.scale)))
-		}
-	}
-	return info
-}
-
-// readDepth reads every pass on the depth dial.
-func (b sheetBuilder) readDepth(rows []SheetRow) DialInfo {
-	d := b.m.Dials.Depth
-	info := dialInfo("depth", d, 1)
-	if !info.Stated {
-		return info
-	}
-	for i := range rows {
-		ps := snapPasses(rows[i].Passes, d)
-		for j := range ps {
-			ps[j].Reading = d.Read(d.Count(ps[j].Depth), 1)
-		}
-		rows[i].Passes = ps
-	}
-	return info
-}
-
-// snapPasses moves every pass but the last to a whole division of the depth dial, no deeper
-// than planned, so each can be set; the last stays at the row's depth (see settable). A pass
-// that would then go no deeper than the one before is dropped.
-func snapPasses(ps []Pass, d Dial) []Pass {
-	div := d.Division() * d.unitMM()
-	var out []Pass
-	last := 0.0
-	for i, p := range ps {
-		if i < len(ps)-1 {
-			p.Depth = math.Floor(p.Depth/div+divisionSnap) * div
-		}
-		if p.Depth > last+divisionSnap*div || i == len(ps)-1 {
-			out = append(out, p)
-			last = p.Depth
-		}
-	}
-	return out
-}
-
-// dialInfo describes a dial for the sheet's header.
-func dialInfo(name string, d Dial, scale float64) DialInfo {
-	info := DialInfo{Name: name, Stated: d.Stated(), Pitch: d.Pitch, Divisions: d.Divisions, Units: d.Units}
-	if info.Units == "" {
-		info.Units = MM
-	}
-	if info.Stated {
-		info.Division = d.Division()
-		info.AtPart = d.Division() * d.unitMM() / scale
-		info.BackOff = d.BackOff()
-	}
-	return info
-}
-
 // notes lists the rules the sheet used and where they come from.
 func (b sheetBuilder) notes() []string {
-	out := []string{
+	return []string{
 		"Readings count from the datum; each dial is set to its datum reading with the stylus in the datum seat. Come up to every reading with the dial counting up; where a row says wind back, go back past the reading by the amount given and come up again (backlash: machine-shop training notes).",
-		"The remainder after a reading is the part of a division the dial cannot show; what it is worth at the part is given beside it. The figure in [ ] is the distance from the datum, in the dial's own units.",
-		"Speeds: " + SpeedSource + ".",
+		"The copy table carries the template: its readings move the template under the stylus, and the linkage takes the cutter 1/R as far. The work table carries the stock under a cutter that stays put: to bring a point that lies to the right of the datum under the cutter it moves left, so its readings count the other way from the copy table's. +X is to your right, +Y away from you.",
+		"The remainder after a reading is the part of a division the dial cannot show; what it is worth at the part is given beside it. The figure in [ ] is the table's move from the datum, in the dial's own units.",
+		"Speeds for " + b.mat.Name + ": n = 1000·v_c/(π·d); v_c from " + b.mat.Source + ".",
+		"Depth passes are rules of thumb (no published source): equal passes in whole divisions of the depth dial, none deeper than the rule given at each tool change.",
 		"Through cuts go past the stock by a break-through allowance: 0.05 mm for cutters, plus the point length (0.3 × D, derived from a 118° point) for drills.",
 	}
-	if g, ok := materialGroup(b.p.Stock.Material); !ok {
-		out = append(out, fmt.Sprintf("The material %q is not in the speed table; the slowest row (%s) was used.", b.p.Stock.Material, g))
-	}
-	return out
 }

@@ -29,6 +29,16 @@ func sheetPlan() Plan {
 	}
 }
 
+// buildSheet builds the sheet of p on m, failing the test on an error.
+func buildSheet(t *testing.T, p Plan, m Machine, o SheetOptions) Sheet {
+	t.Helper()
+	s, err := BuildSheet(p, m, o)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return s
+}
+
 func sheetMachine() Machine {
 	metric := Dial{Pitch: 2, Divisions: 100, Units: MM, Backlash: 0.05} // 0.02 mm/div
 	return Machine{Name: "bench", Dials: Dials{CopyX: metric, CopyY: metric, WorkX: Dial{Pitch: 1, Divisions: 50},
@@ -37,15 +47,23 @@ func sheetMachine() Machine {
 }
 
 func TestBuildSheetRows(t *testing.T) {
-	s := BuildSheet(sheetPlan(), sheetMachine(), SheetOptions{Date: "2026-12-01"})
-	if len(s.Rows) != 4 {
-		t.Fatalf("got %d rows, want 4 (datum, 2 holes, pocket)", len(s.Rows))
+	s := buildSheet(t, sheetPlan(), sheetMachine(), SheetOptions{Date: "2026-12-01"})
+	if len(s.Rows) != 6 {
+		t.Fatalf("got %d rows, want 6 (datum, tool change, 2 holes, tool change, pocket)", len(s.Rows))
+	}
+	for _, i := range []int{1, 4} {
+		if s.Rows[i].What != StepToolChange || s.Rows[i].Where != nil || s.Rows[i].RPM == 0 || len(s.Rows[i].Rules) != 1 {
+			t.Errorf("row %d: got %+v, want a tool change with its speed and one depth rule", i, s.Rows[i])
+		}
 	}
 	// The pocket starts at template X = −20 and may be wound back 0.5 mm (a quarter turn) below
 	// that: derived DatumTurns = ⌈20.5/2⌉ = 11, so the datum reads 11 t 0 div and the pocket's
-	// start 1 t 0 div. Copy Y: the datum's own wind-back, 0.5 mm below 0: 1 turn. Work X (1 mm
-	// screw, wind-back 13 div = 0.26 mm): −2 part mm − 0.26 needs 3 turns.
-	for i, want := range []int{11, 1, 3, 1} {
+	// start 1 t 0 div. Copy Y: the datum's own wind-back, 0.5 mm below 0: 1 turn.
+	// The work table moves the stock under the cutter, so its moves are the points on the stock
+	// with the sign turned: holes at (6, 2) and (4, 2) part mm are moves of (−6, −2) and
+	// (−4, −2), the pocket's start (−2, 3) a move of (+2, −3). Work X (1 mm screw, wind-back
+	// 13 div = 0.26 mm): −6 − 0.26 needs 7 turns; work Y: −3 − 0.26 needs 4 (derived).
+	for i, want := range []int{11, 1, 7, 4} {
 		if d := s.Dials.List()[i]; d.DatumTurns != want {
 			t.Errorf("%s datum turns: got %v, want %v", d.Name, d.DatumTurns, want)
 		}
@@ -60,14 +78,17 @@ func TestBuildSheetRows(t *testing.T) {
 		feature    string
 		firstDepth float64
 	}{
-		// derived: 22 + 60 = 82 mm = 41 t; Y 2 + 20 = 22 mm = 11 t; work X 3 + 6 = 9 t. Pecks (derived): 0.3, then every 0.15 to 1.35 (8), then the
-		// full 1.43024 (through 1.2 + point 0.18 + 0.05): 9.
-		{1, "41 t 0 div", "11 t 0 div", "9 t 0 div", 0, 9, "pins", 0.3},
-		// derived: 22 + 40 = 62 mm = 31 t, behind 82: a reversal on copy X and work X.
-		{2, "31 t 0 div", "11 t 0 div", "7 t 0 div", 2, 0, "pins", 0},
-		// derived: 22 − 20 = 2 mm = 1 t; 2 + 30 = 32 mm = 16 t; work X 3 − 2 = 1 t; behind the
-		// hole: a reversal on both X dials again.
-		{3, "1 t 0 div", "16 t 0 div", "1 t 0 div", 2, 3, "recess", 0.1},
+		// derived: 22 + 60 = 82 mm = 41 t; Y 2 + 20 = 22 mm = 11 t; work X 7 − 6 = 1 t, down from
+		// the datum's 7 t and work Y down from 4 t to 2 t: a wind-back on each work dial.
+		// Pecks (derived): 0.3, then every 0.15 to 1.35 (8), then the full 1.43024 (through 1.2
+		// + point 0.18 + 0.05): 9.
+		{2, "41 t 0 div", "11 t 0 div", "1 t 0 div", 2, 9, "pins", 0.3},
+		// derived: 22 + 40 = 62 mm = 31 t, behind 82: a reversal on copy X; work X 7 − 4 = 3 t,
+		// coming up.
+		{3, "31 t 0 div", "11 t 0 div", "3 t 0 div", 1, 0, "pins", 0},
+		// derived: 22 − 20 = 2 mm = 1 t, behind the hole; 2 + 30 = 32 mm = 16 t; work X 7 + 2 =
+		// 9 t, coming up; work Y 4 − 3 = 1 t, behind 2 t: two reversals.
+		{5, "1 t 0 div", "16 t 0 div", "9 t 0 div", 2, 3, "recess", 0.1},
 	}
 	for _, tc := range tests {
 		r := s.Rows[tc.row]
@@ -96,15 +117,18 @@ func TestBuildSheetRows(t *testing.T) {
 }
 
 func TestBuildSheetSpeedsAndDepth(t *testing.T) {
-	s := BuildSheet(sheetPlan(), sheetMachine(), SheetOptions{})
-	hole := s.Rows[1]
+	s := buildSheet(t, sheetPlan(), sheetMachine(), SheetOptions{})
+	change, hole := s.Rows[1], s.Rows[2]
 	// carbide drill in brass: 61 × 2 = 122 m/min; at 0.6 mm that is 64 723 rpm (derived), capped.
-	if hole.RPM != 15000 || !strings.Contains(hole.SpeedNote, "capped") {
-		t.Errorf("drill speed: got %v (%q), want 15000 capped", hole.RPM, hole.SpeedNote)
+	if change.RPM != 15000 || !strings.Contains(change.SpeedNote, "capped") {
+		t.Errorf("drill speed: got %v (%q), want 15000 capped", change.RPM, change.SpeedNote)
 	}
 	// derived: 1 µm/rev × 15000 rpm = 15 mm/min.
-	if math.Abs(hole.Feed-15) > 1e-9 {
-		t.Errorf("drill feed: got %v, want 15", hole.Feed)
+	if math.Abs(change.Feed-15) > 1e-9 {
+		t.Errorf("drill feed: got %v, want 15", change.Feed)
+	}
+	if hole.RPM != 0 || hole.FeedRule != "" {
+		t.Errorf("the hole row repeats the tool's speed and feed: %+v", hole)
 	}
 	// derived: through 1.2 + 0.3004·0.6 + 0.05 = 1.43024 mm, taken to the next whole division
 	// of the 0.01 mm depth dial: 1.44 mm, 1 t 44 div.
@@ -123,38 +147,14 @@ func TestBuildSheetSpeedsAndDepth(t *testing.T) {
 }
 
 func TestBuildSheetNoDials(t *testing.T) {
-	s := BuildSheet(sheetPlan(), Machine{}, SheetOptions{})
+	s := buildSheet(t, sheetPlan(), Machine{}, SheetOptions{})
 	for _, d := range s.Dials.List() {
 		if d.Stated {
 			t.Errorf("dial %s stated without a machine", d.Name)
 		}
 	}
 	// positions are still there in mm: the second hole is 40 mm on the template, 4 at the part
-	if w := s.Rows[2].Where; w.Template.X != 40 || math.Abs(w.Part.X-4) > 1e-12 {
+	if w := s.Rows[3].Where; w.Template.X != 40 || math.Abs(w.Part.X-4) > 1e-12 {
 		t.Errorf("got %v / %v, want 40 / 4", w.Template.X, w.Part.X)
-	}
-}
-
-func TestSnapPasses(t *testing.T) {
-	d := Dial{Pitch: 1, Divisions: 50} // 0.02 mm a division
-	tests := []struct {
-		name string
-		in   []float64
-		want []float64
-	}{
-		// derived: each pass but the last down to a whole 0.02 mm
-		{"eighths", []float64{0.125, 0.25, 0.375, 0.5}, []float64{0.12, 0.24, 0.36, 0.5}},
-		// derived: 0.01 → 0 is no cut and is dropped; 0.02 stays; 0.03 → 0.02 repeats and goes
-		{"finer than a division", []float64{0.01, 0.02, 0.03, 0.04}, []float64{0.02, 0.04}},
-	}
-	for _, tc := range tests {
-		t.Run(tc.name, func(t *testing.T) {
-			got := snapPasses(passes(tc.in), d)
-			var depths []float64
-			for _, p := range got {
-				depths = append(depths, p.Depth)
-			}
-			approxSlice(t, depths, tc.want, 1e-12)
-		})
 	}
 }

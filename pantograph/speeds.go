@@ -13,77 +13,6 @@ import (
 // small tools on a light machine break before they wear. A speed above the spindle's top speed
 // is capped with a note; micro tools nearly always are.
 
-// SpeedSource names where the surface speeds come from, for the sheet.
-const SpeedSource = "n = 1000·v_c/(π·d); v_c for HSS from shop speed tables (low end of each " +
-	"range), carbide about 2× HSS (tool makers' general catalogues)"
-
-// carbideFactor is how much faster carbide cuts than HSS: "roughly 2×" (tool makers' general
-// catalogues, REFERENCES.md).
-const carbideFactor = 2
-
-// Material groups the surface-speed tables know.
-const (
-	groupAluminium = "aluminium"
-	groupBrass     = "brass and bronze"
-	groupMild      = "mild steel"
-	groupTool      = "tool steel"
-)
-
-// hssSpeed returns HSS surface speeds in m/min, drilling and milling, by material group. Drilling
-// from shop speed tables (aluminium ~76, brass/bronze ~61, mild steel ~34, tool steel ~18);
-// milling the low end of their ranges (76–150, 45–135, 21–37, 12–21).
-func hssSpeed(group string) (drill, mill float64) {
-	switch group {
-	case groupAluminium:
-		return 76, 76
-	case groupBrass:
-		return 61, 45
-	case groupMild:
-		return 34, 21
-	}
-	return 18, 12
-}
-
-// materialWords returns the words looked for in a stock's free-text material, each with its
-// group; the first match wins, so "tool steel" is tried before "steel".
-func materialWords() []struct{ word, group string } {
-	return []struct{ word, group string }{
-		{"alumin", groupAluminium}, {"dural", groupAluminium},
-		{"brass", groupBrass}, {"bronze", groupBrass}, {"copper", groupBrass}, {"nickel silver", groupBrass},
-		{"tool steel", groupTool}, {"silver steel", groupTool}, {"gauge plate", groupTool},
-		{"stainless", groupTool}, {"drill rod", groupTool},
-		{"mild steel", groupMild}, {"steel", groupMild}, {"iron", groupMild},
-	}
-}
-
-// materialGroup returns the speed-table group for a stock material and whether it was
-// recognised. An unknown material is treated as tool steel, the slowest in the table, so that
-// a guess never runs a tool too fast.
-func materialGroup(material string) (string, bool) {
-	m := strings.ToLower(material)
-	for _, w := range materialWords() {
-		if strings.Contains(m, w.word) {
-			return w.group, true
-		}
-	}
-	return groupTool, false
-}
-
-// surfaceSpeed returns v_c in m/min for a tool of kind and toolMaterial ("hss" or "carbide";
-// anything else counts as HSS) cutting a stock material. Engravers run at milling speeds.
-func surfaceSpeed(material, toolMaterial string, kind ToolKind) float64 {
-	g, _ := materialGroup(material)
-	vd, vm := hssSpeed(g)
-	v := vm
-	if kind == ToolDrill {
-		v = vd
-	}
-	if strings.EqualFold(toolMaterial, "carbide") {
-		v *= carbideFactor
-	}
-	return v
-}
-
 // RPM returns n = 1000·v_c / (π·d) for v_c in m/min and a tool of d mm.
 func RPM(vc, d float64) float64 { return 1000 * vc / (math.Pi * d) }
 
@@ -97,15 +26,12 @@ type Speed struct {
 }
 
 // speedFor returns the spindle speed for a tool of kind, diameter d mm and toolMaterial cutting
-// material on spindle s.
-func speedFor(s Spindle, material, toolMaterial string, d float64, kind ToolKind) Speed {
-	vc := surfaceSpeed(material, toolMaterial, kind)
+// the stock mat on spindle s.
+func speedFor(s Spindle, mat StockMaterial, toolMaterial string, d float64, kind ToolKind) Speed {
+	vc := mat.SurfaceSpeed(toolMaterial, kind)
 	sp := Speed{SurfaceSpeed: vc, Wanted: RPM(vc, d)}
 	sp.RPM = sp.Wanted
 	var notes []string
-	if _, ok := materialGroup(material); !ok {
-		notes = append(notes, fmt.Sprintf("material %q not in the speed table: tool steel speeds used", material))
-	}
 	switch {
 	case s.MaxRPM > 0 && sp.Wanted > s.MaxRPM:
 		sp.RPM, sp.Capped = s.MaxRPM, true
@@ -136,18 +62,20 @@ const microDrillFeed = 0.001
 const defaultFlutes = 2
 
 // feedGuide returns a feed in mm/min for a micro tool of kind and diameter d mm at rpm, with
-// the rule it came from, or ok false for a tool that is not micro. flutes 0 means two.
-func feedGuide(d, rpm float64, flutes int, kind ToolKind) (feed float64, rule string, ok bool) {
+// the rule it came from (lengths in u), or ok false for a tool that is not micro. flutes 0
+// means two.
+func feedGuide(d, rpm float64, flutes int, kind ToolKind, u Units) (feed float64, rule string, ok bool) {
 	if d >= microTool {
 		return 0, "", false
 	}
 	if kind == ToolDrill {
-		return microDrillFeed * rpm, "about 1 µm per rev for drills below 1 mm (from memory)", true
+		return microDrillFeed * rpm, fmt.Sprintf("about %s per rev for drills below %s (from memory)",
+			u.Length(microDrillFeed), u.Length(microTool)), true
 	}
 	if flutes <= 0 {
 		flutes = defaultFlutes
 	}
 	chip := microChipShare * d
 	return chip * float64(flutes) * rpm,
-		fmt.Sprintf("%.4f mm per tooth × %d flutes: 0.5 %% of D (low end of 0.5–1 %%, from memory)", chip, flutes), true
+		fmt.Sprintf("%s per tooth × %d flutes: 0.5 %% of D (low end of 0.5–1 %%, from memory)", u.Length(chip), flutes), true
 }

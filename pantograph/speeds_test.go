@@ -1,7 +1,9 @@
 package pantograph
 
 import (
+	"errors"
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -43,7 +45,8 @@ func TestSpeedForCap(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			sp := speedFor(tc.s, "brass", "hss", 0.5, ToolMill)
+			brass, _ := DefaultMaterials().Find("brass")
+			sp := speedFor(tc.s, brass, "hss", 0.5, ToolMill)
 			if math.Abs(sp.RPM-tc.want) > 0.5 || sp.Capped != tc.capped || (sp.Note != "") != tc.hasNote {
 				t.Errorf("got %.1f capped %v note %q, want %v capped %v note %v", sp.RPM, sp.Capped, sp.Note, tc.want, tc.capped, tc.hasNote)
 			}
@@ -62,12 +65,15 @@ func TestSurfaceSpeed(t *testing.T) {
 		{"6082 aluminium", "hss", ToolDrill, 76}, // aluminium drilling ~76
 		{"silver steel", "hss", ToolMill, 12},    // tool steel milling 12–21, low end
 		{"mild steel", "hss", ToolDrill, 34},     // mild steel drilling ~34
-		{"boxwood", "hss", ToolDrill, 18},        // unknown: slowest row (tool steel drilling ~18)
 		{"stainless steel", "hss", ToolMill, 12}, // counted as tool steel: before "steel"
 	}
 	for _, tc := range tests {
 		t.Run(tc.material, func(t *testing.T) {
-			if got := surfaceSpeed(tc.material, tc.tool, tc.kind); got != tc.want {
+			mat, ok := DefaultMaterials().Find(tc.material)
+			if !ok {
+				t.Fatalf("%q not in the speed table", tc.material)
+			}
+			if got := mat.SurfaceSpeed(tc.tool, tc.kind); got != tc.want {
 				t.Errorf("got %v, want %v", got, tc.want)
 			}
 		})
@@ -76,14 +82,45 @@ func TestSurfaceSpeed(t *testing.T) {
 
 func TestFeedGuide(t *testing.T) {
 	// derived: 0.005 × 0.5 mm = 2.5 µm/tooth × 2 flutes × 15000 rpm = 75 mm/min.
-	if f, _, ok := feedGuide(0.5, 15000, 0, ToolMill); !ok || math.Abs(f-75) > 1e-9 {
+	if f, _, ok := feedGuide(0.5, 15000, 0, ToolMill, MM); !ok || math.Abs(f-75) > 1e-9 {
 		t.Errorf("end mill: got %v %v, want 75 true", f, ok)
 	}
 	// derived: 1 µm/rev × 15000 rpm = 15 mm/min.
-	if f, _, ok := feedGuide(0.6, 15000, 0, ToolDrill); !ok || math.Abs(f-15) > 1e-9 {
+	if f, _, ok := feedGuide(0.6, 15000, 0, ToolDrill, MM); !ok || math.Abs(f-15) > 1e-9 {
 		t.Errorf("drill: got %v %v, want 15 true", f, ok)
 	}
-	if _, _, ok := feedGuide(2, 5000, 2, ToolMill); ok {
+	if _, _, ok := feedGuide(2, 5000, 2, ToolMill, MM); ok {
 		t.Errorf("a 2 mm cutter got a micro feed guide")
+	}
+}
+
+func TestMaterials(t *testing.T) {
+	table := MaterialsFor(&Machine{Materials: []StockMaterial{
+		{Name: "Boxwood", Group: "wood", HSSDrill: 100, HSSMill: 90, CarbideDrill: 150, CarbideMill: 140, StepShare: 0.5, Source: "the shop's own trials"},
+		{Name: "brass", Group: "free-cutting brass", HSSDrill: 80, HSSMill: 70, CarbideDrill: 160, CarbideMill: 140, StepShare: 0.5, Source: "the shop's own trials"},
+	}})
+	tests := []struct {
+		material string
+		want     string // the row found, "" for none
+		drill    float64
+	}{
+		{"clock brass", "brass", 80}, // the machine file's row replaces the built-in one
+		{"boxwood", "boxwood", 100},  // and adds its own, names matched without case
+		{"Silver Steel", "silver steel", 18},
+		{"stainless steel", "stainless", 18}, // the longest name found wins over "steel"
+		{"mild steel", "mild steel", 34},
+		{"unobtainium", "", 0},
+		{"", "", 0},
+	}
+	for _, tc := range tests {
+		t.Run(tc.material, func(t *testing.T) {
+			r, err := table.Resolve(tc.material)
+			switch {
+			case tc.want == "" && (err == nil || !errors.Is(err, ErrMaterial) || !strings.Contains(err.Error(), "boxwood")):
+				t.Errorf("got %v, want an error listing the known materials", err)
+			case tc.want != "" && (err != nil || r.Name != tc.want || r.HSSDrill != tc.drill):
+				t.Errorf("got %+v, %v; want %s at %v m/min", r, err, tc.want, tc.drill)
+			}
+		})
 	}
 }

@@ -53,7 +53,7 @@ func TestStylusEntersWhereTheCutterDoes(t *testing.T) {
 				if f.Kind == KindHoles {
 					rs = []geom.Region{geom.NewRegion(f.HoleContour(0))}
 				}
-				cutterLost, _ := openingFit(pf, rs, cutter)
+				cutterLost, _ := openingFit(pf, rs, cutter, MM)
 				enters := stylusEnters(rs[0], ratio, cutter/2, s/2)
 				if enters == (cutterLost == StatusLost) {
 					t.Errorf("stylus enters %v, cutter check %v: want them to agree", enters, cutterLost)
@@ -93,7 +93,7 @@ func TestPointedStylusOnAnOpeningAsWideAsTheCutter(t *testing.T) {
 			f := slotFeature("slot", geom.V(3, 3), geom.V(3+length, 3), tc.width, through)
 			p := mustPlan(t, plate(f), Setup{Ratio: ratio, Cutter: cutter, Stylus: 3, Tip: TipPointed, AcceptLoss: true})
 			pf := planned(t, p, "slot")
-			if st, _ := openingFit(pf, []geom.Region{f.Region}, cutter); st == StatusLost {
+			if st, _ := openingFit(pf, []geom.Region{f.Region}, cutter, MM); st == StatusLost {
 				t.Fatalf("cutter check got %v, want the slot made", st)
 			}
 			if got := pf.Status == StatusLost; got != tc.lost {

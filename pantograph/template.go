@@ -21,6 +21,7 @@ type planner struct {
 	setup   Setup
 	machine *Machine // nil without a machine file
 	t       geom.Transform
+	u       Units // the part's units, for messages
 }
 
 // plan returns the template of one feature with its status and warnings.
@@ -85,9 +86,9 @@ func (pl planner) traced(pf PlannedFeature, rs []geom.Region, inside bool) (Plan
 	pf.Method = Traced
 	var ws []Problem
 	if inside {
-		pf.Status, ws = openingFit(pf, rs, pf.Cutter)
+		pf.Status, ws = openingFit(pf, rs, pf.Cutter, pl.u)
 	} else {
-		pf.Status, ws = profileFit(pf, rs[0], pf.Cutter)
+		pf.Status, ws = profileFit(pf, rs[0], pf.Cutter, pl.u)
 	}
 	if pf.Status == StatusLost {
 		return pf, ws
@@ -111,7 +112,7 @@ func (pl planner) traced(pf PlannedFeature, rs []geom.Region, inside bool) (Plan
 			// wide as the cutter leaves a path of no width, which no template can hold.
 			ws = append(ws, warnf(pf, "with a pointed stylus the template opening is the cutter's centre path, and here it has no width: no template can hold it; use a round stylus"))
 		} else {
-			ws = append(ws, warnf(pf, "the stylus Ø%s cannot enter the template opening at all", num(pf.Stylus)))
+			ws = append(ws, warnf(pf, "the stylus Ø%s cannot enter the template opening at all", pl.u.Length(pf.Stylus)))
 		}
 		return pf, ws
 	}
@@ -155,8 +156,8 @@ func (pl planner) oversizeLoss(pf PlannedFeature, rs []geom.Region, inside bool)
 		return Problem{}, false
 	}
 	radius := -pf.Compensation / pl.setup.Ratio
-	return amountWarn(pf, radius, "the stylus Ø%s is larger than the matched Ø%s, so sharp corners of the material come out rounded to R%s at the part and details narrower than %s are cut away (%s mm² of the part differ); use a stylus nearer Ø%s",
-		num(pf.Stylus), num(pf.Matched), num(radius), mm(2*radius), num(lost), num(pf.Matched)), true
+	return amountWarn(pf, radius, "the stylus Ø%s is larger than the matched Ø%s, so sharp corners of the material come out rounded to R%s at the part and details narrower than %s are cut away (%s of the part differ); use a stylus nearer Ø%s",
+		pl.u.Length(pf.Stylus), pl.u.Length(pf.Matched), pl.u.Length(radius), pl.u.Length(2*radius), pl.u.Area(lost), pl.u.Length(pf.Matched)), true
 }
 
 // oversizeAreaTol is the area, in mm² at the part per mm² of feature, below which the stylus
@@ -185,7 +186,7 @@ func (pl planner) holes(pf PlannedFeature, f Feature) (PlannedFeature, []Problem
 		}
 		pf, ws := pl.traced(pf, rs, true)
 		if !haveDrill && !pl.setup.MillHoles {
-			ws = append(ws, warnf(pf, "no drill of Ø%s at hand: milled with the Ø%s cutter instead", num(f.Diameter), num(cutter)))
+			ws = append(ws, warnf(pf, "no drill of Ø%s at hand: milled with the Ø%s cutter instead", pl.u.Length(f.Diameter), pl.u.Length(cutter)))
 		}
 		return pf, ws
 	}
@@ -202,9 +203,9 @@ func (pl planner) holes(pf PlannedFeature, f Feature) (PlannedFeature, []Problem
 	}
 	var ws []Problem
 	if !haveDrill {
-		w := warnf(pf, "no drill of Ø%s at hand", num(f.Diameter))
+		w := warnf(pf, "no drill of Ø%s at hand", pl.u.Length(f.Diameter))
 		if drill > 0 {
-			w = amountWarn(pf, math.Abs(drill-f.Diameter), "no drill of Ø%s at hand; the nearest is Ø%s", num(f.Diameter), num(drill))
+			w = amountWarn(pf, math.Abs(drill-f.Diameter), "no drill of Ø%s at hand; the nearest is Ø%s", pl.u.Length(f.Diameter), pl.u.Length(drill))
 		}
 		ws = append(ws, w)
 	}
@@ -242,7 +243,7 @@ func (pl planner) groove(pf PlannedFeature, f Feature) (PlannedFeature, []Proble
 	if f.Width > 0 && math.Abs(f.Width-pf.Cutter) > sizeTol {
 		pf.Status = StatusDeviates
 		return pf, []Problem{amountWarn(pf, math.Abs(f.Width-pf.Cutter),
-			"drawn %s wide, but the Ø%s cutter engraves it %s wide", mm(f.Width), num(pf.Cutter), mm(pf.Cutter))}
+			"drawn %s wide, but the Ø%s cutter engraves it %s wide", pl.u.Length(f.Width), pl.u.Length(pf.Cutter), pl.u.Length(pf.Cutter))}
 	}
 	return pf, nil
 }

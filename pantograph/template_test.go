@@ -79,7 +79,7 @@ func containsVec(vs []geom.Vec, w geom.Vec) bool {
 func TestMismatchedStylus(t *testing.T) {
 	// R = 10, cutter 0.5, stylus 4.0: δ = 10·0.25 − 2.0 = 0.5 (derived; REFERENCES.md).
 	setup := Setup{Ratio: 10, Cutter: 0.5, Stylus: 4, MillHoles: true}
-	boss := Part{Name: "boss", Stock: Stock{Thickness: 1},
+	boss := Part{Name: "boss", Stock: Stock{Material: "brass", Thickness: 1},
 		Profile: Feature{Kind: KindProfile, Region: geom.NewRegion(geom.Circle(geom.V(0, 0), 1))}}
 	hole := plate(holes("bore", 2, through, geom.V(10, 5)))
 	rect := plate()
@@ -129,7 +129,7 @@ func TestMirrorAndTurn(t *testing.T) {
 	// (1, 0). Seats derived by hand in TestSetupTransform; the template's outer contour runs
 	// counter-clockwise (positive signed area) whatever the transform, and its area is R² × 5.
 	l := geom.Polygon(geom.V(0, 0), geom.V(4, 0), geom.V(4, 1), geom.V(1, 1), geom.V(1, 2), geom.V(0, 2))
-	part := Part{Name: "ell", Datum: geom.V(1, 0), Stock: Stock{Thickness: 1},
+	part := Part{Name: "ell", Datum: geom.V(1, 0), Stock: Stock{Material: "brass", Thickness: 1},
 		Profile:  Feature{Kind: KindProfile, Region: geom.NewRegion(l)},
 		Features: []Feature{holes("pin", 0.5, through, geom.V(3, 0.5))}}
 	tests := []struct {

@@ -139,7 +139,7 @@ func TestImportWritesPartFile(t *testing.T) {
 // TestMakeDXFFiles plans a drawing and checks that both DXF files read back: the template's
 // outline is the part's profile at the ratio, the part's at true size.
 func TestMakeDXFFiles(t *testing.T) {
-	part, _, err := cad.ReadFile(drawings+"pump-port-plate.svg", cad.Options{Thickness: 0.8})
+	part, _, err := cad.ReadFile(drawings+"pump-port-plate.svg", cad.Options{Thickness: 0.8, Material: "brass"})
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -86,7 +86,7 @@ func (e dxfEntity) span() (float64, float64) {
 // plateArgs makes plate-mm.dxf at 10:1 with a 0.5 mm cutter and the matched 5 mm stylus, so
 // the template is the part times ten with no compensation.
 func plateArgs(out string, extra ...string) []string {
-	args := []string{"make", drawings + "plate-mm.dxf", "--thickness", "1", "--ratio", "10", "--cutter", "0.5",
+	args := []string{"make", drawings + "plate-mm.dxf", "--thickness", "1", "--material", "brass", "--ratio", "10", "--cutter", "0.5",
 		"-o", out, "--date", "2026-12-01"}
 	return append(args, extra...)
 }

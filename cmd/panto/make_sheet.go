@@ -39,7 +39,10 @@ func sheetFiles(p pantograph.Plan, m *pantograph.Machine, paperName, date string
 	if m != nil {
 		mc = *m
 	}
-	s := pantograph.BuildSheet(p, mc, pantograph.SheetOptions{Date: date})
+	s, err := pantograph.BuildSheet(p, mc, pantograph.SheetOptions{Date: date})
+	if err != nil {
+		return nil, err
+	}
 	return encodeFiles([]fileEncoder{
 		{"sheet.pdf", func(b *bytes.Buffer) error { return sheet.EncodePDF(b, s, paper) }},
 		{"sheet.csv", func(b *bytes.Buffer) error { return sheet.EncodeCSV(b, s) }},

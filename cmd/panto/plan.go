@@ -96,7 +96,7 @@ func (o *planFlags) setup(fl *pflag.FlagSet) (pantograph.Setup, error) {
 	o.drawingGiven = givenDrawingFlags(fl)
 	s := pantograph.Setup{Ratio: o.ratio, Cutter: o.cutter, Stylus: o.stylus,
 		Tip: pantograph.Tip(o.tip), Mirror: o.mirror, Rotate: geom.Degrees(o.rotate),
-		AcceptLoss: o.acceptLoss, MillHoles: o.millHoles}
+		Rotated: fl.Changed("rotate"), AcceptLoss: o.acceptLoss, MillHoles: o.millHoles}
 	if fl.Changed("stylus") && !(o.stylus > 0) {
 		return s, fmt.Errorf("--stylus must be greater than 0 mm, got %g", o.stylus)
 	}
@@ -178,6 +178,9 @@ func layout(p pantograph.Plan) string {
 	}
 	if d := p.Setup.Rotate.Degrees(); d != 0 {
 		s += fmt.Sprintf(", turned %s° anticlockwise", num(d))
+		if p.CopyTurn.Degrees() == d {
+			s += " (the linkage turns the copy back)"
+		}
 	}
 	return s
 }
@@ -257,7 +260,7 @@ func compensationText(f pantograph.PlannedFeature) string {
 // stepText says what one step of the order of work is.
 func stepText(p pantograph.Plan, st pantograph.Step) string {
 	if st.Feature < 0 {
-		return "set the stylus in the datum seat and zero the dials"
+		return pantograph.DatumInstruction
 	}
 	f := p.Features[st.Feature]
 	switch st.What {
@@ -340,7 +343,8 @@ Flags:
                        are larger than the cutter
   --mirror             mirror the template left for right about the datum
   --rotate DEG         turn the template DEG degrees anticlockwise about the datum (after
-                       any mirror); 180 suits a linkage pivoted between stylus and cutter
+                       any mirror). Default: as the machine file's linkage needs, 180 when its
+                       [ratio] pivot = "between" (the copy comes out turned 180°), else 0
   --accept-loss        plan even when the cutter cannot make some feature; it is left out
   --mill-holes         mill every hole larger than its cutter instead of drilling it
 ` + stockAndDrawingHelp + `  --json               print the plan as one JSON object instead:

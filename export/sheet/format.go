@@ -1,7 +1,8 @@
 // Package sheet writes the dial-reading sheet (pantograph.Sheet) as text for the terminal and
 // a printer, CSV for a spreadsheet, JSON for scripts, and PDF on A4 or Letter. The writers only
-// lay out what the sheet holds; every number is the sheet's own. Output is deterministic: the
-// same sheet gives the same bytes.
+// lay out what the sheet holds; every number is the sheet's own, and lengths at the part are
+// said in the part's own units (Sheet.Units). Output is deterministic: the same sheet gives the
+// same bytes.
 package sheet
 
 import (
@@ -14,15 +15,18 @@ import (
 	"panto/pantograph"
 )
 
+// This file words what the text and PDF sheets share: the header, the dials, the heading and
+// lines of each step, and the cells of the passes table.
+
 // num formats a length in mm for people (numfmt.MM).
 func num(v float64) string { return numfmt.MM(v) }
 
-// reading formats a reading with the remainder's worth at the part when there is one:
+// reading formats a reading with the remainder's worth at the part, in u, when there is one:
 // "6 t 17 div" or "2 t 34 div +0.50 div (0.0013 mm)".
-func reading(r pantograph.Reading) string {
+func reading(r pantograph.Reading, u pantograph.Units) string {
 	s := r.String()
 	if r.Remainder >= 0.005 {
-		s += " (" + numfmt.Fixed(r.AtPart, 4) + " mm)"
+		s += " (" + numfmt.Fixed(u.FromMM(r.AtPart), 4) + " " + u.Word() + ")"
 	}
 	return s
 }
@@ -35,9 +39,9 @@ func header(s pantograph.Sheet) [][2]string {
 	h := [][2]string{{"part file", s.Source}}
 	stock := s.Material
 	if s.Thickness > 0 {
-		stock += ", " + num(s.Thickness) + " mm thick"
+		stock += ", " + s.Units.Length(s.Thickness) + " thick"
 	}
-	h = append(h, [2]string{"stock", stock})
+	h = append(h, [2]string{"stock", stock + "; speeds for " + s.Speeds})
 	ratio := num(s.Ratio) + ":1, the template " + num(s.Ratio) + " times the part"
 	if s.Layout != "" {
 		ratio += ", " + s.Layout
@@ -45,7 +49,7 @@ func header(s pantograph.Sheet) [][2]string {
 	h = append(h, [2]string{"ratio", ratio})
 	machine := s.Machine
 	if machine == "" {
-		machine = "no machine file: positions in mm only"
+		machine = "no machine file: positions as lengths only"
 	}
 	h = append(h, [2]string{"machine", machine})
 	if s.Date != "" {
@@ -61,35 +65,48 @@ func header(s pantograph.Sheet) [][2]string {
 	return h
 }
 
-// dialLine describes a dial: "copy X  2 mm / 100 div = 0.02 mm per div, 0.002 mm at the part;
-// set 3 t 0 div at the datum; wind back 0.5 mm after a reversal".
+// dialLine describes a dial: its screw and division, which way it moves its table, what it is
+// set to at the datum and how far to wind back after a reversal.
 func dialLine(d pantograph.DialInfo) string {
 	if !d.Stated {
-		return "not stated in the machine file: set positions in mm"
+		return "not stated in the machine file: set positions by measuring"
 	}
-	return fmt.Sprintf("%s %s / %d div = %s %s per div (%s mm at the part); at the datum set %d t 0 div; wind back %s %s after a reversal",
-		num(d.Pitch), d.Units, d.Divisions, fine(d.Division), d.Units, fine(d.AtPart), d.DatumTurns, fine(d.BackOff), d.Units)
+	way := "counting up moves the table " + d.CountUp
+	if d.Name == "depth" {
+		way = "counting up moves the cutter " + d.CountUp
+	}
+	if d.Reversed {
+		way += " (reversed)"
+	}
+	return fmt.Sprintf("%s %s / %d div = %s %s per div (%s mm at the part); %s; at the datum set %d t 0 div; wind back %s %s after a reversal",
+		num(d.Pitch), d.Units, d.Divisions, fine(d.Division), d.Units, fine(d.AtPart), way, d.DatumTurns, fine(d.BackOff), d.Units)
 }
 
 // fine formats a small quantity to four decimals without trailing zeros (0.0001 in is a
 // common inch division).
 func fine(v float64) string { return numfmt.Trim(v, 4) }
 
-// stepTitle is a row's heading: "3  #2 pins: drill hole 1 of 2".
+// stepTitle is a row's heading: "3. #2 pins: drill hole 1 of 2", "2. tool change: ...".
 func stepTitle(r pantograph.SheetRow) string {
-	if r.What == pantograph.StepDatum {
+	switch r.What {
+	case pantograph.StepDatum:
 		return fmt.Sprintf("%d. datum", r.Step)
+	case pantograph.StepToolChange:
+		return fmt.Sprintf("%d. tool change: %s, %s", r.Step, r.Tool, r.Stylus)
 	}
 	return fmt.Sprintf("%d. #%d %s: %s", r.Step, r.Number, r.Feature, r.Action)
 }
 
 // positionLines gives the copy-table and work-table lines of a position.
-func positionLines(p *pantograph.Position, dials pantograph.SheetDials) []string {
+func positionLines(p *pantograph.Position, s pantograph.Sheet) []string {
 	if p == nil {
 		return nil
 	}
-	copyLine := fmt.Sprintf("copy table  X %s  Y %s", axisText(p.CopyX, p.Template.X, dials.CopyX), axisText(p.CopyY, p.Template.Y, dials.CopyY))
-	workLine := fmt.Sprintf("work table  X %s  Y %s", axisText(p.WorkX, p.Part.X, dials.WorkX), axisText(p.WorkY, p.Part.Y, dials.WorkY))
+	ds := s.Dials
+	copyLine := fmt.Sprintf("copy table  X %s  Y %s", axisText(p.CopyX, p.Template.X, ds.CopyX, s.Units),
+		axisText(p.CopyY, p.Template.Y, ds.CopyY, s.Units))
+	workLine := fmt.Sprintf("work table  X %s  Y %s", axisText(p.WorkX, -p.Part.X, ds.WorkX, s.Units),
+		axisText(p.WorkY, -p.Part.Y, ds.WorkY, s.Units))
 	out := []string{copyLine, workLine}
 	for _, b := range p.BackOff {
 		out = append(out, "first "+b)
@@ -97,54 +114,54 @@ func positionLines(p *pantograph.Position, dials pantograph.SheetDials) []string
 	return out
 }
 
-// axisText is a reading with its distance from the datum in the dial's own units, or the
-// distance in mm alone without a dial.
-func axisText(r pantograph.Reading, mm float64, d pantograph.DialInfo) string {
+// axisText is a reading with the table's move from the datum in the dial's own units, or the
+// move alone, in the part's units, without a dial.
+func axisText(r pantograph.Reading, move float64, d pantograph.DialInfo, u pantograph.Units) string {
 	if !d.Stated {
-		return num(mm) + " mm"
+		return "move " + signed(move, u)
 	}
-	return fmt.Sprintf("%s [%s]", reading(r), length(mm, d.Units))
+	return fmt.Sprintf("%s [%s]", reading(r, u), signed(move, d.Units))
 }
 
-// length formats mm in units: "132.08 mm" or "5.2 in" (inches to 0.0001, a tenth of the
-// finest common inch division).
-func length(mm float64, u pantograph.Units) string {
-	if u == pantograph.Inch {
-		return fine(mm/pantograph.MMPerInch) + " in"
+// signed formats a move with its sign: "+44 mm", "−5.5 mm", "0 mm".
+func signed(mm float64, u pantograph.Units) string {
+	s := u.Length(mm)
+	if !strings.HasPrefix(s, "-") && !strings.HasPrefix(s, "0 ") {
+		return "+" + s
 	}
-	return num(mm) + " mm"
+	return strings.Replace(s, "-", "−", 1)
 }
 
-// depthLines gives the depth and passes of a row.
-func depthLines(r pantograph.SheetRow, depth pantograph.DialInfo) []string {
-	if r.What == pantograph.StepDatum {
-		return nil
-	}
+// depthLine gives the depth of a row and how many passes or pecks reach it.
+func depthLine(r pantograph.SheetRow, s pantograph.Sheet) string {
 	word := plural(len(r.Passes), "pass", "passes")
 	if r.What == pantograph.StepDrill {
 		word = plural(len(r.Passes), "peck", "pecks")
 	}
-	total := num(r.Depth) + " mm"
-	if depth.Stated && depth.Units == pantograph.Inch {
-		total = length(r.Depth, pantograph.Inch) + " (" + total + ")"
+	depth := s.Units.Length(r.Depth)
+	if r.Through {
+		depth += " (through)"
 	}
-	if len(r.Passes) == 0 {
-		return []string{fmt.Sprintf("depth %s: %s", total, r.PassRule)}
+	switch {
+	case r.PassNote != "":
+		return fmt.Sprintf("depth %s, %s", depth, r.PassNote)
+	case len(r.Passes) == 0:
+		return "depth " + depth
 	}
-	parts := make([]string, len(r.Passes))
+	return fmt.Sprintf("depth %s: %d %s, each ticked when cut", depth, len(r.Passes), word)
+}
+
+// passCells gives one cell of the passes table per pass: the depth in the part's units and,
+// with a depth dial, its reading.
+func passCells(r pantograph.SheetRow, s pantograph.Sheet) []string {
+	out := make([]string, len(r.Passes))
 	for i, p := range r.Passes {
-		parts[i] = num(p.Depth)
-		if depth.Stated {
-			parts[i] += " (" + reading(p.Reading) + ")"
-			if depth.Units == pantograph.Inch {
-				parts[i] = fmt.Sprintf("%s (%s)", length(p.Depth, pantograph.Inch), reading(p.Reading))
-			}
+		out[i] = s.Units.Number(p.Depth)
+		if s.Dials.Depth.Stated {
+			out[i] += "  " + reading(p.Reading, s.Units)
 		}
 	}
-	return []string{
-		fmt.Sprintf("depth %s in %d %s: %s", total, len(r.Passes), word, strings.Join(parts, ", ")),
-		"rule: " + r.PassRule,
-	}
+	return out
 }
 
 // roughly formats a guide figure to two significant digits: a feed guide is not exact.
@@ -164,8 +181,8 @@ func plural(n int, one, many string) string {
 	return many
 }
 
-// speedLine gives a row's spindle speed and feed guide.
-func speedLine(r pantograph.SheetRow) string {
+// speedLine gives a tool change's spindle speed and feed guide.
+func speedLine(r pantograph.SheetRow, u pantograph.Units) string {
 	if r.RPM == 0 {
 		return ""
 	}
@@ -174,23 +191,28 @@ func speedLine(r pantograph.SheetRow) string {
 		s += " (" + r.SpeedNote + ")"
 	}
 	if r.Feed > 0 {
-		s += fmt.Sprintf("; feed about %s mm/min, %s", roughly(r.Feed), r.FeedRule)
+		s += fmt.Sprintf("; feed about %s %s/min, %s", roughly(u.FromMM(r.Feed)), u.Word(), r.FeedRule)
 	}
 	return s
 }
 
-// rowLines gives every line under a row's heading.
-func rowLines(r pantograph.SheetRow, dials pantograph.SheetDials) []string {
+// rowLines gives every line under a row's heading; the passes table follows them.
+func rowLines(r pantograph.SheetRow, s pantograph.Sheet) []string {
 	var out []string
-	if r.Tool != "" {
-		out = append(out, r.Tool+", "+r.Stylus)
-	} else {
+	switch r.What {
+	case pantograph.StepDatum, pantograph.StepToolChange:
 		out = append(out, r.Action)
 	}
-	out = append(out, positionLines(r.Where, dials)...)
-	out = append(out, depthLines(r, dials.Depth)...)
-	if s := speedLine(r); s != "" {
-		out = append(out, s)
+	out = append(out, positionLines(r.Where, s)...)
+	if r.What == pantograph.StepToolChange {
+		if l := speedLine(r, s.Units); l != "" {
+			out = append(out, l)
+		}
+		for _, rule := range r.Rules {
+			out = append(out, "depth rule: "+rule)
+		}
+	} else if r.What != pantograph.StepDatum {
+		out = append(out, depthLine(r, s))
 	}
 	return out
 }

@@ -9,15 +9,18 @@ import (
 	"panto/pantograph"
 )
 
-// The JSON sheet is a view of pantograph.Sheet with snake_case keys; lengths are mm (template
-// mm for copy-table positions, part mm for work-table positions and depths), readings carry
-// their turns, divisions and remainder, and numbers are rounded to a nanometre so float noise
-// does not show.
+// The JSON sheet is a view of pantograph.Sheet with snake_case keys; lengths are mm whatever the
+// part's units (template mm for copy-table moves, part mm for the stock point, the work-table
+// move and depths), readings carry their turns, divisions and remainder, and numbers are
+// rounded to a nanometre so float noise does not show. "units" says what the part was drawn
+// in, which the text and PDF sheets print.
 
 type sheetJSON struct {
 	Part      string     `json:"part"`
 	File      string     `json:"file"`
+	Units     string     `json:"units"`
 	Material  string     `json:"material"`
+	Speeds    string     `json:"speeds_for"`
 	Thickness float64    `json:"thickness"`
 	Ratio     float64    `json:"ratio"`
 	Layout    string     `json:"layout,omitempty"`
@@ -34,6 +37,8 @@ type sheetJSON struct {
 type dialJSON struct {
 	Name       string  `json:"name"`
 	Stated     bool    `json:"stated"`
+	CountUp    string  `json:"counting_up_moves"`
+	Reversed   bool    `json:"reversed"`
 	Pitch      float64 `json:"pitch"`
 	Divisions  int     `json:"divisions"`
 	Units      string  `json:"units"`
@@ -54,6 +59,7 @@ type readingJSON struct {
 type positionJSON struct {
 	Template [2]float64   `json:"template_mm"`
 	Part     [2]float64   `json:"part_mm"`
+	WorkMove [2]float64   `json:"work_move_mm"`
 	CopyX    *readingJSON `json:"copy_x"`
 	CopyY    *readingJSON `json:"copy_y"`
 	WorkX    *readingJSON `json:"work_x"`
@@ -77,7 +83,8 @@ type rowJSON struct {
 	Where     *positionJSON `json:"where"`
 	Depth     float64       `json:"depth_mm"`
 	Passes    []passJSON    `json:"passes"`
-	PassRule  string        `json:"pass_rule"`
+	PassNote  string        `json:"pass_note,omitempty"`
+	Rules     []string      `json:"rules,omitempty"`
 	RPM       float64       `json:"rpm"`
 	SpeedNote string        `json:"speed_note"`
 	Feed      float64       `json:"feed_mm_min"`
@@ -86,13 +93,14 @@ type rowJSON struct {
 
 // EncodeJSON writes s as one indented JSON object.
 func EncodeJSON(w io.Writer, s pantograph.Sheet) error {
-	out := sheetJSON{Part: s.Part, File: s.Source, Material: s.Material, Thickness: nm(s.Thickness),
+	out := sheetJSON{Part: s.Part, File: s.Source, Units: string(orMM(s.Units)), Material: s.Material,
+		Speeds: s.Speeds, Thickness: nm(s.Thickness),
 		Ratio: s.Ratio, Layout: s.Layout, Machine: s.Machine, Date: s.Date, Tools: nonNil(s.Tools),
 		Warnings: nonNil(s.Warnings), Notes: nonNil(s.Notes), Cautions: nonNil(s.Cautions)}
 	for _, d := range s.Dials.List() {
 		out.Dials = append(out.Dials, dialJSON{Name: d.Name, Stated: d.Stated, Pitch: d.Pitch,
 			Divisions: d.Divisions, Units: string(d.Units), Division: nm(d.Division), AtPart: nm(d.AtPart),
-			DatumTurns: d.DatumTurns, BackOff: nm(d.BackOff)})
+			DatumTurns: d.DatumTurns, BackOff: nm(d.BackOff), CountUp: d.CountUp, Reversed: d.Reversed})
 	}
 	for _, r := range s.Rows {
 		out.Rows = append(out.Rows, rowOf(r, s.Dials))
@@ -105,12 +113,13 @@ func EncodeJSON(w io.Writer, s pantograph.Sheet) error {
 // rowOf converts one row.
 func rowOf(r pantograph.SheetRow, dials pantograph.SheetDials) rowJSON {
 	rj := rowJSON{Step: r.Step, Number: r.Number, Feature: r.Feature, Kind: string(r.What),
-		Action: r.Action, Tool: r.Tool, Stylus: r.Stylus, Depth: nm(r.Depth), PassRule: r.PassRule,
+		Action: r.Action, Tool: r.Tool, Stylus: r.Stylus, Depth: nm(r.Depth), PassNote: r.PassNote, Rules: r.Rules,
 		RPM: math.Round(r.RPM), SpeedNote: r.SpeedNote, Feed: nm(r.Feed), FeedRule: r.FeedRule,
 		Passes: []passJSON{}}
 	if p := r.Where; p != nil {
 		rj.Where = &positionJSON{Template: [2]float64{nm(p.Template.X), nm(p.Template.Y)},
-			Part: [2]float64{nm(p.Part.X), nm(p.Part.Y)}, CopyX: readingOf(p.CopyX, dials.CopyX),
+			Part: [2]float64{nm(p.Part.X), nm(p.Part.Y)}, WorkMove: [2]float64{nm(-p.Part.X), nm(-p.Part.Y)},
+			CopyX: readingOf(p.CopyX, dials.CopyX),
 			CopyY: readingOf(p.CopyY, dials.CopyY), WorkX: readingOf(p.WorkX, dials.WorkX),
 			WorkY: readingOf(p.WorkY, dials.WorkY), WindBack: nonNil(p.BackOff)}
 	}
@@ -127,6 +136,14 @@ func readingOf(r pantograph.Reading, d pantograph.DialInfo) *readingJSON {
 	}
 	return &readingJSON{Turns: r.Turns, Divisions: r.Divisions, Remainder: nm(r.Remainder),
 		AtPart: nm(r.AtPart), Text: r.String()}
+}
+
+// orMM is u, or millimetres when it is not stated.
+func orMM(u pantograph.Units) pantograph.Units {
+	if u == "" {
+		return pantograph.MM
+	}
+	return u
 }
 
 // nm rounds a length for JSON (numfmt.JSON: to a nanometre).

@@ -160,7 +160,7 @@ func layout(f *flow, s pantograph.Sheet) {
 	f.rule()
 	f.text(0, sizeHead, true, "Steps: tick each box when done")
 	for _, r := range s.Rows {
-		f.step(r, s.Dials)
+		f.step(r, s)
 	}
 	f.rule()
 	f.list("Notes", s.Notes, "")
@@ -175,16 +175,18 @@ func (f *flow) labelled(label, value string) {
 	}
 }
 
-// step sets one step: a tick box and heading, then its lines, kept on one page.
-func (f *flow) step(r pantograph.SheetRow, dials pantograph.SheetDials) {
-	lines := rowLines(r, dials)
-	f.need(float64(len(lines)+2) * sizeReading * 0.3528 * lineGap)
+// step sets one step: a tick box and heading, then its lines and its passes, kept on one page.
+func (f *flow) step(r pantograph.SheetRow, s pantograph.Sheet) {
+	lines := rowLines(r, s)
+	cells := passCells(r, s)
+	per := f.cellsPerLine(cells)
+	rowsOfCells := (len(cells) + per - 1) / per
+	f.need(float64(len(lines)+rowsOfCells+2) * sizeReading * 0.3528 * lineGap)
 	f.space(2)
 	top := f.y
 	f.text(indent, sizeReading+1, true, stepTitle(r))
 	if !f.dry {
-		b := geom.Box{Min: geom.V(pageMargin, top-boxSize-0.6), Max: geom.V(pageMargin+boxSize, top-0.6)}
-		f.pen.Rect(b, 0.35)
+		f.pen.Rect(geom.Box{Min: geom.V(pageMargin, top-boxSize-0.6), Max: geom.V(pageMargin+boxSize, top-0.6)}, 0.35)
 	}
 	for _, l := range lines {
 		bold := strings.HasPrefix(l, "copy table") || strings.HasPrefix(l, "work table") || strings.HasPrefix(l, "first ")
@@ -193,6 +195,44 @@ func (f *flow) step(r pantograph.SheetRow, dials pantograph.SheetDials) {
 			size = sizeReading
 		}
 		f.text(indent+2, size, bold, l)
+	}
+	f.passGrid(cells, per)
+}
+
+// passCellGap is the room a pass cell keeps beside its text, mm: the tick box and a gap.
+const passCellGap = 9
+
+// cellsPerLine is how many pass cells fit across the page in columns of the widest one.
+func (f *flow) cellsPerLine(cells []string) int {
+	w := 0.0
+	for _, c := range cells {
+		w = max(w, f.fonts.Width(c, sizeBody, false)+passCellGap)
+	}
+	if w == 0 {
+		return 1
+	}
+	return max(1, int((f.paper.W-2*pageMargin-indent-4)/w))
+}
+
+// passGrid sets the passes in columns, each with a small box to tick.
+func (f *flow) passGrid(cells []string, per int) {
+	if len(cells) == 0 {
+		return
+	}
+	colW := (f.paper.W - 2*pageMargin - indent - 4) / float64(per)
+	h := sizeBody * 0.3528 * lineGap
+	for i := 0; i < len(cells); i += per {
+		f.need(h)
+		f.y -= h
+		for j := i; j < min(i+per, len(cells)); j++ {
+			if f.dry {
+				continue
+			}
+			x := pageMargin + indent + 4 + float64(j-i)*colW
+			b := boxSize * 0.7
+			f.pen.Rect(geom.Box{Min: geom.V(x, f.y-0.4), Max: geom.V(x+b, f.y-0.4+b)}, 0.25)
+			f.pen.Text(x+b+1.5, f.y, sizeBody, false, cells[j], canvas.Left)
+		}
 	}
 }
 

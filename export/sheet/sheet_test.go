@@ -55,7 +55,11 @@ func sampleSheet(t *testing.T, j sampleJob) pantograph.Sheet {
 	if err != nil {
 		t.Fatal(err)
 	}
-	return pantograph.BuildSheet(p, m, pantograph.SheetOptions{Date: "2026-12-01"})
+	s, err := pantograph.BuildSheet(p, m, pantograph.SheetOptions{Date: "2026-12-01"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	return s
 }
 
 // TestGoldenText compares sheet.txt of each sample with testdata; run with -update after a
@@ -114,11 +118,17 @@ func TestEveryFormatHasEveryStep(t *testing.T) {
 				t.Fatal(err)
 			}
 			for i, r := range s.Rows {
+				if recs[i+1][3] != string(r.What) {
+					t.Errorf("CSV kind of step %d: got %q, want %q", r.Step, recs[i+1][3], r.What)
+				}
+				if r.Where == nil {
+					continue // a tool change
+				}
 				if rd := r.Where.CopyX.String(); !strings.Contains(txt.String(), "X "+rd) {
 					t.Errorf("text lacks copy X reading %q of step %d", rd, r.Step)
 				}
-				if got := recs[i+1][9]; got != reading(r.Where.CopyX) {
-					t.Errorf("CSV copy X of step %d: got %q, want %q", r.Step, got, reading(r.Where.CopyX))
+				if got := recs[i+1][9]; got != reading(r.Where.CopyX, s.Units) {
+					t.Errorf("CSV copy X of step %d: got %q, want %q", r.Step, got, reading(r.Where.CopyX, s.Units))
 				}
 			}
 		})

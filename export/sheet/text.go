@@ -39,12 +39,37 @@ func EncodeText(w io.Writer, s pantograph.Sheet) error {
 	for _, r := range s.Rows {
 		bw.WriteString("\n")
 		line("", 4, "[ ] "+stepTitle(r))
-		for _, l := range rowLines(r, s.Dials) {
+		for _, l := range rowLines(r, s) {
 			line("      ", 2, l)
+		}
+		for _, l := range passTable(passCells(r, s), textWidth-8) {
+			line("        ", 0, l)
 		}
 	}
 	section(bw, line, "Notes", s.Notes, "")
 	return bw.Flush()
+}
+
+// passTable sets cells as "[ ] cell" in columns of one width, as many to a line as fit in
+// width runes, so every pass has its own box and the table stays short.
+func passTable(cells []string, width int) []string {
+	if len(cells) == 0 {
+		return nil
+	}
+	col := 0
+	for _, c := range cells {
+		col = max(col, len([]rune(c))+6)
+	}
+	per := max(1, width/col)
+	var out []string
+	for i := 0; i < len(cells); i += per {
+		var b strings.Builder
+		for j := i; j < min(i+per, len(cells)); j++ {
+			b.WriteString(padRight("[ ] "+cells[j], col))
+		}
+		out = append(out, strings.TrimRight(b.String(), " "))
+	}
+	return out
 }
 
 // labelWidth is the width of the header's label column.

@@ -16,14 +16,19 @@ import (
 //	name  = "bench pantograph"       free text
 //	units = "mm"                     "mm" (default) or "in": the unit of every length below
 //	[ratio]                          REQUIRED: min and max, or settings = [2, 3, 5, 10]
+//	  pivot                          "end" (default: the copy lies as the template) or
+//	                                 "between" (pivot between stylus and cutter: turned 180°)
 //	[copy_table]  travel = [x, y]    how far the table moves
 //	  fixing_spacing = [x, y]        centre distance of its clamps or T-slots, for the plate
 //	  fixing_size                    diameter of its clamp bolts
 //	[work_table]  travel = [x, y]
 //	[dials.copy_x] (copy_y, work_x, work_y, depth)
 //	  pitch, divisions               REQUIRED in a dial: advance per turn, graduations per turn
-//	  units, backlash, reversed      the screw's units (default: the file's), lost motion on
-//	                                 reversing in the screw's units, whether counting up moves −
+//	  units, backlash, count_up      the screw's units (default: the file's), lost motion on
+//	                                 reversing in the screw's units, which way counting up
+//	                                 moves the table: "right" or "left" (X dials), "away" or
+//	                                 "toward" (Y), "down" or "up" (depth); reversed = true is
+//	                                 the older way to say the second
 //	[spindle]     min_rpm, max_rpm
 //	[[stylus]]    name, diameter, tip ("round", the default, or "pointed")
 //	[[cutter]]    name, diameter, material ("hss" or "carbide"), flutes
@@ -44,7 +49,7 @@ var machineTopKeys = []string{"name", "units", "ratio", "copy_table", "work_tabl
 // dialKeys are the dials under [dials], and dialFields the keys of each.
 var (
 	dialKeys   = []string{"copy_x", "copy_y", "work_x", "work_y", "depth"}
-	dialFields = []string{"pitch", "divisions", "units", "backlash", "reversed"}
+	dialFields = []string{"pitch", "divisions", "units", "backlash", "count_up", "reversed"}
 )
 
 // minRatio is the smallest ratio a machine may state: the template is never smaller than the
@@ -153,13 +158,16 @@ func (t table) optChild(key string, known ...string) (table, bool, error) {
 
 // readRatio reads [ratio]: min and max for a linkage set anywhere between, or fixed settings.
 func readRatio(top table, mc *pantograph.Machine) error {
-	t, ok, err := top.optChild("ratio", "min", "max", "settings")
+	t, ok, err := top.optChild("ratio", "min", "max", "settings", "pivot")
 	if err != nil {
 		return err
 	}
 	if !ok {
 		return &Error{File: top.r.file, Msg: "no [ratio]: say what the linkage can be set to, for example\n" +
 			"  [ratio]\n  min = 2\n  max = 10\nor, for a machine with fixed settings,\n  [ratio]\n  settings = [2, 5, 10]"}
+	}
+	if err := readPivot(t, mc); err != nil {
+		return err
 	}
 	if t.has("settings") {
 		if t.has("min") || t.has("max") {
@@ -180,6 +188,27 @@ func readRatio(top table, mc *pantograph.Machine) error {
 		return t.at("max").errf("must not be less than min (%g), got %g", mc.Ratio.Min, mc.Ratio.Max)
 	}
 	return nil
+}
+
+// readPivot reads [ratio] pivot: "end" (the default) or "between".
+func readPivot(t table, mc *pantograph.Machine) error {
+	mc.Pivot = pantograph.PivotEnd
+	v, ok := t.m["pivot"]
+	if !ok {
+		return nil
+	}
+	l := t.at("pivot")
+	s, err := l.text(v)
+	if err != nil {
+		return err
+	}
+	switch p := pantograph.Pivot(s); p {
+	case pantograph.PivotEnd, pantograph.PivotBetween:
+		mc.Pivot = p
+		return nil
+	}
+	return l.errf(`must be "end" (the fixed pivot at the end of the arms: the copy lies as the template) `+
+		`or "between" (the pivot between stylus and cutter: the copy is turned 180°), got %q`, s)
 }
 
 // readSettings reads the fixed ratio settings, sorted, each once.
@@ -338,7 +367,7 @@ func readDials(top table, mc *pantograph.Machine) error {
 			return err
 		}
 		if ok {
-			if *to[key], err = readDial(d, mc.Units); err != nil {
+			if *to[key], err = readDial(d, key, mc.Units); err != nil {
 				return err
 			}
 		}
@@ -346,8 +375,8 @@ func readDials(top table, mc *pantograph.Machine) error {
 	return nil
 }
 
-// readDial reads one dial; its units default to the file's.
-func readDial(t table, fileUnits pantograph.Units) (pantograph.Dial, error) {
+// readDial reads the dial named key; its units default to the file's.
+func readDial(t table, key string, fileUnits pantograph.Units) (pantograph.Dial, error) {
 	d := pantograph.Dial{Units: fileUnits}
 	var err error
 	for _, key := range []string{"pitch", "divisions"} {
@@ -375,10 +404,41 @@ func readDial(t table, fileUnits pantograph.Units) (pantograph.Dial, error) {
 			return d, err
 		}
 	}
-	if v, ok := t.m["reversed"]; ok {
-		d.Reversed, err = t.at("reversed").flag(v)
-	}
+	d.Reversed, err = readCountUp(t, key)
 	return d, err
+}
+
+// countUpWords are the words count_up takes for each dial: which way counting up moves the
+// table (X to the operator's right or left, Y away or toward, the knee down or up), the first
+// word of each pair being the plain direction (+X, +Y, down into the work).
+var countUpWords = map[string][2]string{"copy_x": {"right", "left"}, "work_x": {"right", "left"},
+	"copy_y": {"away", "toward"}, "work_y": {"away", "toward"}, "depth": {"down", "up"}}
+
+// readCountUp reads which way counting up moves the dial's table, from count_up (its words) or
+// the older reversed = true / false, and reports whether that is against the axis.
+func readCountUp(t table, key string) (bool, error) {
+	words := countUpWords[key]
+	if t.has("count_up") && t.has("reversed") {
+		return false, t.at("reversed").errf("give count_up = %q or %q, not reversed as well", words[0], words[1])
+	}
+	if v, ok := t.m["reversed"]; ok {
+		return t.at("reversed").flag(v)
+	}
+	v, ok := t.m["count_up"]
+	if !ok {
+		return false, nil
+	}
+	l := t.at("count_up")
+	s, err := l.text(v)
+	switch {
+	case err != nil:
+		return false, err
+	case s == words[0]:
+		return false, nil
+	case s == words[1]:
+		return true, nil
+	}
+	return false, l.errf("says which way counting up moves the table: %q or %q, got %q", words[0], words[1], s)
 }
 
 // readSpindle reads [spindle] min_rpm and max_rpm.
