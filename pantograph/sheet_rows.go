@@ -40,7 +40,9 @@ func (b sheetBuilder) rows() []SheetRow {
 
 // toolKey names the tool and stylus a feature is made with: a change of either is a tool
 // change.
-func (b sheetBuilder) toolKey(f PlannedFeature) string { return b.toolText(f) + " / " + b.stylusText(f) }
+func (b sheetBuilder) toolKey(f PlannedFeature) string {
+	return b.toolText(f) + " / " + b.stylusText(f)
+}
 
 // toolChange is the step that puts f's tool in the spindle before step i: which tool and
 // stylus, the speed, the feed guide and the depth rules of every feature it cuts until the
