@@ -12,6 +12,16 @@ type Options struct {
 	// MinWall is the thinnest wall, in mm, between two features or between a feature and the
 	// profile edge, that Check accepts without a warning.
 	MinWall float64
+	// Units are what the problems' messages give lengths in; "" means the part's own units.
+	Units Units
+}
+
+// units returns the units messages about p are given in.
+func (o Options) units(p Part) Units {
+	if o.Units != "" {
+		return o.Units
+	}
+	return p.Units
 }
 
 // DefaultMinWall is the wall thickness below which Check warns: 0.1 mm, about where a wall in
@@ -26,18 +36,18 @@ func DefaultOptions() Options { return Options{MinWall: DefaultMinWall} }
 // A part with any error should not be cut; see HasErrors.
 func Check(p Part, o Options) []Problem {
 	var ps []Problem
-	ps = append(ps, checkStock(p)...)
+	ps = append(ps, checkStock(p, o.units(p))...)
 	ps = append(ps, checkNames(p)...)
 	good := []Feature{}
 	for _, f := range p.All() {
-		fs := checkFeature(f, p.Stock, p.Units)
+		fs := checkFeature(f, p.Stock, o.units(p))
 		ps = append(ps, fs...)
 		if !HasErrors(fs) {
 			good = append(good, f)
 		}
 	}
 	if len(good) > 0 && good[0].Kind == KindProfile {
-		es := elementsOf(good[1:], p.Units)
+		es := elementsOf(good[1:], o.units(p))
 		ps = append(ps, checkPlacement(good[0], es, o)...)
 		ps = append(ps, checkPairs(es, o)...)
 	}
@@ -73,7 +83,7 @@ func sortProblems(ps []Problem) []Problem {
 }
 
 // checkStock looks at the stock on its own.
-func checkStock(p Part) []Problem {
+func checkStock(p Part, u Units) []Problem {
 	t := p.Stock.Thickness
 	where := p.Profile.Where
 	switch {
@@ -82,7 +92,7 @@ func checkStock(p Part) []Problem {
 			Message: "stock thickness missing: give [stock] thickness so depths can be checked"}}
 	case !(t > 0) || math.IsInf(t, 0):
 		return []Problem{{Severity: Error, Label: "[stock]", Where: where,
-			Message: "stock thickness must be greater than 0, got " + p.Units.Length(t)}}
+			Message: "stock thickness must be greater than 0, got " + u.Length(t)}}
 	}
 	return nil
 }

@@ -36,7 +36,25 @@ type Measure struct {
 	MM      float64
 	Feature string   // the label of the feature it comes from
 	At      geom.Vec // where on the part, in mm
-	Found   bool
+	// Angle is, for a corner, the angle of the free space the cutter works in there, in
+	// radians: the opening's own angle at an inside corner of an opening, 2π less the part's at
+	// a notch in the profile.
+	Angle float64
+	Found bool
+}
+
+// CornerLeft returns what a cutter of diameter d leaves in a corner measured by m: a round
+// cutter in a corner of free-space angle θ cannot come closer to the vertex than r/sin(θ/2),
+// its centre on the bisector touching both sides, and cuts r of that, so it leaves
+// r(1/sin(θ/2) − 1) along the bisector (r(√2 − 1) at 90°) less what the corner's own radius
+// already rounds: where the corner's radius is r or more nothing is left (derived).
+func (m Measure) CornerLeft(d float64) float64 {
+	r := d / 2
+	if !m.Found || m.MM >= r || !(m.Angle > 0 && m.Angle < math.Pi) {
+		return 0
+	}
+	k := 1/math.Sin(m.Angle/2) - 1
+	return (r - m.MM) * k
 }
 
 // FeatureInfo names one feature for listings.
@@ -136,7 +154,7 @@ func lone(i int, boxes []geom.Box) bool {
 // corner that one opening swallows of another is still counted, so the measure errs tight.
 func cutterLimits(p Part) (radius, gap Measure) {
 	if c, ok := p.Profile.Region.SharpestConcaveCorner(); ok {
-		radius = Measure{MM: c.Radius, Feature: p.Profile.Label(), At: c.At, Found: true}
+		radius = Measure{MM: c.Radius, Feature: p.Profile.Label(), At: c.At, Angle: 2*math.Pi - c.Angle, Found: true}
 	}
 	if g, ok := p.Profile.Region.NarrowestGap(); ok {
 		gap = Measure{MM: g.Width, Feature: p.Profile.Label(), At: g.A.Lerp(g.B, 0.5), Found: true}
@@ -146,7 +164,7 @@ func cutterLimits(p Part) (radius, gap Measure) {
 			continue
 		}
 		if c, ok := f.Region.SharpestConvexCorner(); ok {
-			radius = smaller(radius, Measure{MM: c.Radius, Feature: f.Label(), At: c.At, Found: true})
+			radius = smaller(radius, Measure{MM: c.Radius, Feature: f.Label(), At: c.At, Angle: c.Angle, Found: true})
 		}
 		if g, ok := f.Region.NarrowestWidth(); ok {
 			gap = smaller(gap, Measure{MM: g.Width, Feature: f.Label(), At: g.A.Lerp(g.B, 0.5), Found: true})

@@ -123,3 +123,26 @@ func TestLargestCutter(t *testing.T) {
 		})
 	}
 }
+
+func TestCornerLeft(t *testing.T) {
+	tests := []struct {
+		name string
+		m    Measure
+		d    float64
+		want float64
+	}{
+		// derived: r(√2 − 1) at a sharp 90° corner, r = 0.25
+		{"sharp square", Measure{Angle: math.Pi / 2, Found: true}, 0.5, 0.25 * (math.Sqrt2 - 1)},
+		// derived: 60°: r(1/sin 30° − 1) = r
+		{"sharp 60°", Measure{Angle: math.Pi / 3, Found: true}, 1, 0.5},
+		// derived: a corner rounded R0.1 under an R0.25 cutter: (0.25 − 0.1)(√2 − 1)
+		{"rounded smaller", Measure{MM: 0.1, Angle: math.Pi / 2, Found: true}, 0.5, 0.15 * (math.Sqrt2 - 1)},
+		{"rounded enough", Measure{MM: 0.3, Angle: math.Pi / 2, Found: true}, 0.5, 0},
+		{"no corner", Measure{}, 0.5, 0},
+	}
+	for _, tc := range tests {
+		if got := tc.m.CornerLeft(tc.d); math.Abs(got-tc.want) > 1e-12 {
+			t.Errorf("%s: got %v, want %v", tc.name, got, tc.want)
+		}
+	}
+}

@@ -55,10 +55,16 @@ func (u Units) FromMM(mm float64) float64 {
 // Point formats a point given in mm in these units: "(1.5, 2)".
 func (u Units) Point(x, y float64) string { return "(" + u.Number(x) + ", " + u.Number(y) + ")" }
 
-// Area formats an area given in mm² in these units: "1.717 mm²" or "0.0027 in²".
+// Area formats an area given in mm² in these units: "1.717 mm²" or "1.7424 in²"; an area too
+// small for those decimals keeps two significant digits ("4.2e-05 mm²"), so a small uncut
+// sliver is not reported as none.
 func (u Units) Area(mm2 float64) string {
+	v, word, decimals := mm2, " mm²", 3
 	if u == Inch {
-		return numfmt.Trim(mm2/(MMPerInch*MMPerInch), 6) + " in²"
+		v, word, decimals = mm2/(MMPerInch*MMPerInch), " in²", 4
 	}
-	return numfmt.MM(mm2) + " mm²"
+	if a := math.Abs(v); a > 0 && a < math.Pow(10, -float64(decimals)) {
+		return strconv.FormatFloat(v, 'g', 2, 64) + word
+	}
+	return numfmt.Trim(v, decimals) + word
 }

@@ -10,7 +10,7 @@ import (
 const usage = `panto prepares parts for a manual pantograph mill.
 
 Usage:
-  panto check PART [--json] [--min-wall MM]   check a part file and say what limits the cutter
+  panto check PART [--json] [--units mm|in]   check a part file and say what limits the cutter
   panto plan PART --ratio R --cutter D [...]  plan the template: sizes, compensation, order of work
   panto stylus --ratio R --cutter D [...]     the stylus for a cutter, or the cutter for a stylus
   panto import DRAWING [-o PART.toml] [...]   make a part file from a DXF or SVG drawing
@@ -28,7 +28,7 @@ Exit codes: 0 done (warnings may be printed), 1 the job could not be done,
 2 bad usage or a bad part file.
 `
 
-const checkUsage = `Usage: panto check PART [--json] [--min-wall MM]
+const checkUsage = `Usage: panto check PART [--json] [--min-wall MM] [--units mm|in]
 
 Reads the part file PART, checks it, and prints a short summary: the part's size and area,
 its features, the smallest inside corner radius and the narrowest gap, and from those the
@@ -39,7 +39,8 @@ Errors (a feature outside the profile, holes overlapping, a pocket deeper than t
 a depth missing, an outline that crosses itself) make the file bad: exit code 2.
 Warnings (a wall thinner than --min-wall, a feature inside an opening) leave it at 0.
 
-Every length is in millimetres, whatever units the file was drawn in.
+Lengths are printed in the units the part was drawn in, or those --units names. The JSON is
+in millimetres whatever the part's units.
 
 Flags:
   --json          print the summary as one JSON object instead:
@@ -59,6 +60,7 @@ Flags:
                     features [{name, kind, count}]
                     problems [{severity, feature, message, line, amount}]
   --min-wall MM   warn about walls thinner than MM (default %g)
+  --units mm|in   print lengths in millimetres or inches (default: the part's own units)
   -h, --help      show this help
 `
 

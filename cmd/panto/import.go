@@ -19,7 +19,7 @@ import (
 type importFlags struct {
 	out     string
 	drawing drawingFlags
-	thick   float64
+	thick   lengthFlag
 	stuff   string
 	force   bool
 	help    bool
@@ -35,7 +35,7 @@ func runImport(args []string, stdout, stderr io.Writer) error {
 	fl.SetOutput(io.Discard)
 	fl.StringVarP(&o.out, "output", "o", "", "the part file to write (default: the drawing's name with .toml)")
 	addDrawingFlags(fl, &o.drawing)
-	fl.Float64Var(&o.thick, "thickness", 0, "stock thickness, in the drawing's units")
+	fl.Var(&o.thick, "thickness", "stock thickness, in the drawing's units (or give mm or in)")
 	fl.StringVar(&o.stuff, "material", "", "stock material, e.g. brass")
 	fl.BoolVar(&o.force, "force", false, "overwrite the part file if it exists")
 	fl.BoolVarP(&o.help, "help", "h", false, "show help")
@@ -49,15 +49,26 @@ func runImport(args []string, stdout, stderr io.Writer) error {
 	return importDrawing(fl.Arg(0), o, opts, stdout)
 }
 
-// options turns the flags into drawing options. The stock's thickness is in the drawing's
-// units here, as it is written into the part file.
+// options turns the flags into drawing options. A plain --thickness is in the drawing's
+// units, as it is written into the part file; one given with its unit is put in after reading
+// (see stockThickness).
 func (o importFlags) options() (cad.Options, error) {
 	opts, err := o.drawing.options()
 	if err != nil {
 		return opts, err
 	}
-	opts.Thickness, opts.Material = o.thick, o.stuff
-	return opts, checkThickness(o.thick)
+	opts.Material = o.stuff
+	if o.thick.l.unit == "" {
+		opts.Thickness = o.thick.l.value
+	}
+	return opts, checkThickness(o.thick.l.mm(pantograph.MM))
+}
+
+// stockThickness puts a --thickness given with its unit into the part read, in mm.
+func (o importFlags) stockThickness(part *pantograph.Part) {
+	if o.thick.l.unit != "" {
+		part.Stock.Thickness = o.thick.l.mm(pantograph.MM)
+	}
 }
 
 // importDrawing reads the drawing, prints the report and writes the part file.
@@ -76,6 +87,7 @@ func importDrawing(path string, o importFlags, opts cad.Options, stdout io.Write
 	if err != nil {
 		return badFile("import", "drawing", err)
 	}
+	o.stockThickness(&part)
 	rep.WriteTo(stdout)
 	var buf bytes.Buffer
 	enc := partfile.Encoder{Header: importHeader(path, rep)}
@@ -165,7 +177,8 @@ Flags:
                           to engrave) or ignore; DEPTH in the drawing's units, e.g.
                           --layer RECESS=pocket:0.3  --layer CENTRES=ignore
   --join MM               join ends this close together (default 0.001 mm)
-  --thickness T           the stock's thickness, in the drawing's units, as the part file
+  --thickness T           the stock's thickness, in the drawing's units unless T says mm or in
+                          (0.8mm, 1/32in), as the part file
                           keeps it (drawings do not carry it; panto check and plan need it;
                           plan, sheet and make given a drawing take --thickness in mm)
   --material NAME         the stock's material, for the part file

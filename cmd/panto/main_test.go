@@ -79,6 +79,27 @@ func TestCheckGolden(t *testing.T) {
 	}
 }
 
+// TestCheckSharpCorners: with a sharp inside corner no cutter makes the part as drawn, and the
+// summary says what common cutters leave there: r(√2 − 1) at 90° (derived: Ø1 → 0.207 mm,
+// Ø0.5 → 0.104 mm, Ø0.3 → 0.062 mm, Ø0.2 → 0.041 mm).
+func TestCheckSharpCorners(t *testing.T) {
+	code, out, errOut := runPanto("check", "../../testdata/parts/sharp-window.toml")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errOut)
+	}
+	for _, want := range []string{"sharp (90°)", "none as drawn", "Ø1 mm leaves 0.207 mm", "Ø0.5 mm leaves 0.104 mm",
+		"Ø0.3 mm leaves 0.062 mm", "Ø0.2 mm leaves 0.041 mm"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("check says:\n%s\nwant it to say %q", out, want)
+		}
+	}
+	code, out, _ = runPanto("check", "--units", "in", "../../testdata/parts/sharp-window.toml")
+	// derived: 4 mm = 0.1575 in; 1/16 in leaves (0.0625/2)(√2 − 1) = 0.0129 in
+	if code != exitOK || !strings.Contains(out, "Ø0.0625 in leaves 0.0129 in") || !strings.Contains(out, "(shown here in inches)") {
+		t.Errorf("check --units in says:\n%s", out)
+	}
+}
+
 func TestCheckJSON(t *testing.T) {
 	code, out, errOut := runPanto("check", "--json", "../../samples/calibration-coupon.toml")
 	if code != exitOK {

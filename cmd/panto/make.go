@@ -17,7 +17,8 @@ const makeSynopsis = "panto make PART --ratio R --cutter D [--machine FILE] [--s
 type makeFlags struct {
 	outputFlags
 	seat, style         string
-	fixingSpacing, kerf float64
+	fixingSpacing, kerf float64 // kerf in mm, from kerfLength
+	kerfLength          lengthFlag
 }
 
 // makeJob is everything `panto make` knows when it makes its files.
@@ -52,10 +53,11 @@ func runMake(args []string, stdout, stderr io.Writer) error {
 	fl.StringVar(&mo.seat, "seat", "", "seats for drilled holes: cone or bore")
 	fl.StringVar(&mo.style, "style", "wall", "how traced edges are made: wall or groove")
 	fl.Float64Var(&mo.fixingSpacing, "fixing-spacing", 0, "distance between fixing slots, mm")
-	fl.Float64Var(&mo.kerf, "kerf", 0, "width the laser or router cuts, mm, for template.dxf")
+	fl.Var(&mo.kerfLength, "kerf", "width the laser or router cuts (mm, or give in), for template.dxf")
 	if done, err := parseOne("make", partOrDrawing, makeSynopsis, fl, args, &o.help, stdout); done {
 		return err
 	}
+	mo.kerf = mo.kerfLength.l.mm(pantograph.MM)
 	plate, err := mo.plateOptions()
 	if err == nil && mo.out == "" {
 		err = fmt.Errorf("-o DIR is required: the folder to write the files into\nUsage: %s", makeSynopsis)

@@ -85,18 +85,18 @@ func checkThickness(t float64) error {
 // stock and how to read a drawing.
 func addPlanFlags(fl *pflag.FlagSet, o *planFlags) {
 	fl.Float64Var(&o.ratio, "ratio", 0, "template size : part size")
-	fl.Float64Var(&o.cutter, "cutter", 0, "cutter diameter, mm")
+	fl.Var(&o.lengths.cutter, "cutter", "cutter diameter (mm, or give in: 1/32in)")
 	fl.StringToStringVar(&o.cutterFor, "cutter-for", nil, "cutter for one kind of feature, KIND=MM")
-	fl.Float64Var(&o.stylus, "stylus", 0, "stylus diameter, mm")
+	fl.Var(&o.lengths.stylus, "stylus", "stylus diameter (mm, or give in)")
 	fl.StringVar(&o.tip, "tip", "", "stylus tip: round or pointed")
 	fl.StringVar(&o.machine, "machine", "", "machine file")
 	fl.BoolVar(&o.mirror, "mirror", false, "mirror the template")
 	fl.Float64Var(&o.rotate, "rotate", 0, "turn the template, degrees counter-clockwise")
 	fl.BoolVar(&o.acceptLoss, "accept-loss", false, "plan even if some features are lost")
 	fl.BoolVar(&o.millHoles, "mill-holes", false, "mill holes larger than the cutter")
-	fl.Float64Var(&o.thickness, "thickness", 0, "stock thickness, mm")
+	fl.Var(&o.lengths.thickness, "thickness", "stock thickness (mm, or give in)")
 	fl.StringVar(&o.material, "material", "", "stock material, e.g. brass")
-	fl.Float64SliceVar(&o.datum, "datum", nil, "X,Y: move the datum to this point, in the part's own units")
+	fl.Var(&o.datum, "datum", "X,Y: move the datum to this point, in the part's own units (or give mm or in)")
 	addDrawingFlags(fl, &o.drawing)
 	fl.BoolVarP(&o.help, "help", "h", false, "show help")
 }
@@ -207,23 +207,17 @@ func overrideStock(part *pantograph.Part, o planFlags, isDrawing bool, stderr io
 }
 
 // moveDatum puts the datum where --datum says: a point of the part frame in the part's own
-// drawing units, as the part file's datum key is written. Moving the datum moves every dial
-// reading, so a machinist can put it on a seat that suits the machine or keep readings positive.
-func moveDatum(part *pantograph.Part, xy []float64) error {
-	if xy == nil {
+// drawing units, as the part file's datum key is written, unless a unit is given with it.
+// Moving the datum moves every dial reading, so a machinist can put it on a seat that suits
+// the machine or keep readings positive.
+func moveDatum(part *pantograph.Part, xy pointFlag) error {
+	if !xy.set {
 		return nil
 	}
-	if len(xy) != 2 {
-		return fmt.Errorf("--datum takes two numbers, X,Y; got %d", len(xy))
+	u := part.Units
+	if u == "" {
+		u = pantograph.MM
 	}
-	k := 1.0
-	if part.Units == pantograph.Inch {
-		k = pantograph.MMPerInch
-	}
-	d := geom.V(xy[0]*k, xy[1]*k)
-	if !d.IsFinite() {
-		return fmt.Errorf("--datum must be two numbers, got %v", xy)
-	}
-	part.Datum = d
+	part.Datum = geom.V(xy.x.mm(u), xy.y.mm(u))
 	return nil
 }

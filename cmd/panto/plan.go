@@ -15,7 +15,8 @@ import (
 
 // planFlags are the options of `panto plan`; sheet and make share all but --json.
 type planFlags struct {
-	ratio, cutter, stylus, rotate float64
+	ratio, cutter, stylus, rotate float64 // cutter and stylus in mm, from lengths
+	lengths                       struct{ cutter, stylus, thickness lengthFlag }
 	cutterFor                     map[string]string
 	tip, machine                  string
 	mirror, acceptLoss, millHoles bool
@@ -24,7 +25,7 @@ type planFlags struct {
 	material                      string
 	drawing                       drawingFlags
 	drawingGiven                  []string  // the drawing flags given, for a word when PART is not a drawing
-	datum                         []float64 // --datum X,Y in the part's own units; empty keeps the file's
+	datum                         pointFlag // --datum X,Y; not set keeps the file's
 }
 
 // runPlan is `panto plan PART --ratio R --cutter D [...]`.
@@ -90,6 +91,8 @@ func (o *planFlags) setup(fl *pflag.FlagSet) (pantograph.Setup, error) {
 			return pantograph.Setup{}, fmt.Errorf("--%s is required\nUsage: %s", name, planSynopsis)
 		}
 	}
+	o.cutter, o.stylus = o.lengths.cutter.l.mm(pantograph.MM), o.lengths.stylus.l.mm(pantograph.MM)
+	o.thickness = o.lengths.thickness.l.mm(pantograph.MM)
 	if err := checkThickness(o.thickness); err != nil {
 		return pantograph.Setup{}, err
 	}
