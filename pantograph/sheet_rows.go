@@ -196,6 +196,6 @@ func (b sheetBuilder) notes() []string {
 		"The remainder after a reading is the part of a division the dial cannot show; what it is worth at the part is given beside it. The figure in [ ] is the table's move from the datum, in the dial's own units.",
 		"Speeds for " + b.mat.Name + ": n = 1000·v_c/(π·d); v_c from " + b.mat.Source + ".",
 		"Depth passes are rules of thumb (no published source): equal passes in whole divisions of the depth dial, none deeper than the rule given at each tool change.",
-		"Through cuts go past the stock by a break-through allowance: 0.05 mm for cutters, plus the point length (0.3 × D, derived from a 118° point) for drills.",
+		"Through cuts go past the stock by a break-through allowance: " + b.u.Length(breakThroughMill) + " for cutters, plus the point length (0.3 × D, derived from a 118° point) for drills.",
 	}
 }

@@ -34,7 +34,7 @@ func TestDrawingAsPart(t *testing.T) {
 			"[[cutout]]", ""},
 		// --thickness is in mm whatever the drawing's units: the inch drawing's stock is 1 mm.
 		{"inch drawing, layers", []string{"plan", drawings + "calibration-coupon-in.dxf", "--thickness", "1", "--material", "brass",
-			"--layer", "CENTRE=ignore", "--layer", "RECESS=pocket:0.01"}, exitOK, "brass, 1 mm thick", "$INSUNITS 1 (inches)"},
+			"--layer", "CENTRE=ignore", "--layer", "RECESS=pocket:0.01"}, exitOK, "brass, 0.0394 in thick", "$INSUNITS 1 (inches)"},
 		// The fixture's recess is a group of its own; mapped, it is a pocket 0.3 mm deep.
 		{"SVG layer mapped", []string{"plan", drawings + "pump-port-plate.svg", "--thickness", "0.8", "--material", "brass", "--layer", "recess=pocket:0.3"},
 			exitOK, "0.3 mm deep", "[[pocket]]"},

@@ -145,20 +145,22 @@ func them(n int) string {
 	return "them"
 }
 
-// writePlan prints the plan in a machinist's words.
+// writePlan prints the plan in a machinist's words, every length in the part's own units.
 func writePlan(w io.Writer, p pantograph.Plan) {
+	u := p.Units
 	fmt.Fprintf(w, "plan for %s  (%s)\n", p.Part, p.Source)
 	fmt.Fprintf(w, "  ratio       %s:1, the template %s times the part%s\n", num(p.Setup.Ratio), num(p.Setup.Ratio), layout(p))
 	size := p.Bounds.Size()
-	fmt.Fprintf(w, "  template    %s x %s mm, from %s to %s on the copy table\n",
-		num(size.X), num(size.Y), at(p.Bounds.Min), at(p.Bounds.Max))
-	fmt.Fprintf(w, "  datum       the template's origin is the datum seat, at %s on the part\n", at(p.Datum))
+	fmt.Fprintf(w, "  template    %s x %s, from %s to %s on the copy table\n",
+		u.Number(size.X), u.Length(size.Y), at(u, p.Bounds.Min), at(u, p.Bounds.Max))
+	fmt.Fprintf(w, "  datum       the template's origin is the datum seat, at %s on the part\n", at(u, p.Datum))
 	if p.Stock.Material != "" {
-		fmt.Fprintf(w, "  stock       %s, %s mm thick\n", p.Stock.Material, num(p.Stock.Thickness))
+		fmt.Fprintf(w, "  stock       %s, %s thick; speeds for %s (%s)\n", p.Stock.Material, u.Length(p.Stock.Thickness),
+			p.Material.Name, p.Material.Group)
 	}
-	fmt.Fprintf(w, "\nfeatures (template sizes in mm on the copy table)\n")
+	fmt.Fprintf(w, "\nfeatures (template sizes as on the copy table)\n")
 	for _, i := range byNumber(p.Features) {
-		writeFeature(w, p.Features[i])
+		writeFeature(w, p.Features[i], u)
 	}
 	fmt.Fprintf(w, "\norder of work\n")
 	for i, st := range p.Steps {
@@ -169,7 +171,7 @@ func writePlan(w io.Writer, p pantograph.Plan) {
 		fmt.Fprintf(w, "  none: every feature comes out as drawn\n")
 	}
 	for _, wr := range p.Warnings {
-		fmt.Fprintf(w, "  %s%s\n", wr, amountText(wr))
+		fmt.Fprintf(w, "  %s%s\n", wr, amountText(wr, u))
 	}
 }
 
@@ -189,7 +191,7 @@ func layout(p pantograph.Plan) string {
 }
 
 // writeFeature prints one feature: number, label, tools, what the template carries, status.
-func writeFeature(w io.Writer, f pantograph.PlannedFeature) {
+func writeFeature(w io.Writer, f pantograph.PlannedFeature, u pantograph.Units) {
 	no := "  -"
 	if f.Number > 0 {
 		no = fmt.Sprintf("%3d", f.Number)
@@ -197,20 +199,20 @@ func writeFeature(w io.Writer, f pantograph.PlannedFeature) {
 	fmt.Fprintf(w, "%s  %s\n", no, f.Label)
 	switch f.Method {
 	case pantograph.Drilled:
-		fmt.Fprintf(w, "       drill Ø%s, %s; %d seat%s for the %s stylus Ø%s\n", num(f.Drill), f.Depth,
-			len(f.Seats), suffix(len(f.Seats)), f.Tip, num(f.Stylus))
+		fmt.Fprintf(w, "       drill Ø%s, %s; %d seat%s for the %s stylus Ø%s\n", u.Length(f.Drill), depthText(f, u),
+			len(f.Seats), suffix(len(f.Seats)), f.Tip, u.Length(f.Stylus))
 	case pantograph.Engraved:
-		fmt.Fprintf(w, "       cutter Ø%s, %s deep; %s stylus Ø%s along a channel %s mm wide\n",
-			num(f.Cutter), f.Depth, f.Tip, num(f.Stylus), num(f.Width))
+		fmt.Fprintf(w, "       cutter Ø%s, %s; %s stylus Ø%s along a channel %s wide\n",
+			u.Length(f.Cutter), depthText(f, u), f.Tip, u.Length(f.Stylus), u.Length(f.Width))
 	case pantograph.Traced:
 		if f.Status == pantograph.StatusLost {
-			fmt.Fprintf(w, "       cutter Ø%s, %s; not on the template\n", num(f.Cutter), depthText(f))
+			fmt.Fprintf(w, "       cutter Ø%s, %s; not on the template\n", u.Length(f.Cutter), depthText(f, u))
 			break
 		}
-		fmt.Fprintf(w, "       cutter Ø%s, %s; %s stylus Ø%s; %s\n", num(f.Cutter), depthText(f),
-			f.Tip, num(f.Stylus), compensationText(f))
+		fmt.Fprintf(w, "       cutter Ø%s, %s; %s stylus Ø%s; %s\n", u.Length(f.Cutter), depthText(f, u),
+			f.Tip, u.Length(f.Stylus), compensationText(f, u))
 		b := f.TemplateBounds.Size()
-		fmt.Fprintf(w, "       template %s x %s mm, area %s mm²\n", num(b.X), num(b.Y), num(f.TemplateArea))
+		fmt.Fprintf(w, "       template %s x %s, area %s\n", u.Number(b.X), u.Length(b.Y), u.Area(f.TemplateArea))
 	}
 	switch f.Status {
 	case pantograph.StatusDeviates:
@@ -220,19 +222,16 @@ func writeFeature(w io.Writer, f pantograph.PlannedFeature) {
 	}
 }
 
-// depthText is "through" or the depth of a traced feature.
-func depthText(f pantograph.PlannedFeature) string {
-	if f.Kind == pantograph.KindProfile || f.Kind == pantograph.KindCutout {
+// depthText is "through" or the depth of a feature.
+func depthText(f pantograph.PlannedFeature, u pantograph.Units) string {
+	if f.Kind == pantograph.KindProfile || f.Kind == pantograph.KindCutout || f.Depth.Through {
 		return "through"
 	}
-	if f.Depth.Through {
-		return "through"
-	}
-	return num(f.Depth.MM) + " mm deep"
+	return u.Length(f.Depth.MM) + " deep"
 }
 
 // compensationText says which way the template's edge moves and by how much.
-func compensationText(f pantograph.PlannedFeature) string {
+func compensationText(f pantograph.PlannedFeature, u pantograph.Units) string {
 	d := f.Compensation
 	dir := pantograph.DirectionOf(d)
 	if dir == pantograph.DirectionNone {
@@ -249,15 +248,15 @@ func compensationText(f pantograph.PlannedFeature) string {
 		verb = "grown"
 	}
 	if f.Tip == pantograph.TipPointed {
-		return fmt.Sprintf("a pointed stylus traces with its point, so the template %s is %s by %s mm all round (R × the cutter's radius)",
-			edge, verb, num(abs(d)))
+		return fmt.Sprintf("a pointed stylus traces with its point, so the template %s is %s by %s all round (R × the cutter's radius)",
+			edge, verb, u.Length(abs(d)))
 	}
 	size := "under"
 	if d < 0 {
 		size = "over"
 	}
-	return fmt.Sprintf("the stylus is %s mm %s the matched Ø%s, so the template %s is %s by %s mm all round",
-		num(abs(f.Stylus-f.Matched)), size, num(f.Matched), edge, verb, num(abs(d)))
+	return fmt.Sprintf("the stylus is %s %s the matched Ø%s, so the template %s is %s by %s all round",
+		u.Length(abs(f.Stylus-f.Matched)), size, u.Length(f.Matched), edge, verb, u.Length(abs(d)))
 }
 
 // stepText says what one step of the order of work is.
@@ -265,30 +264,31 @@ func stepText(p pantograph.Plan, st pantograph.Step) string {
 	if st.Feature < 0 {
 		return pantograph.DatumInstruction
 	}
+	u := p.Units
 	f := p.Features[st.Feature]
 	switch st.What {
 	case pantograph.StepDrill:
 		var seats []string
 		for _, s := range st.Seats {
-			seats = append(seats, at(s))
+			seats = append(seats, at(u, s))
 		}
-		return fmt.Sprintf("drill      %s with the Ø%s drill: seat%s %s", f.Label, num(st.Drill), suffix(len(seats)), strings.Join(seats, ", "))
+		return fmt.Sprintf("drill      %s with the Ø%s drill: seat%s %s", f.Label, u.Length(st.Drill), suffix(len(seats)), strings.Join(seats, ", "))
 	case pantograph.StepEngrave:
-		return fmt.Sprintf("engrave    %s (cutter Ø%s)", f.Label, num(f.Cutter))
+		return fmt.Sprintf("engrave    %s (cutter Ø%s)", f.Label, u.Length(f.Cutter))
 	}
 	verb := "mill      "
 	if f.Kind == pantograph.KindProfile {
 		verb = "cut out   "
 	}
-	return fmt.Sprintf("%s %s (cutter Ø%s, %s)", verb, f.Label, num(f.Cutter), depthText(f))
+	return fmt.Sprintf("%s %s (cutter Ø%s, %s)", verb, f.Label, u.Length(f.Cutter), depthText(f, u))
 }
 
-// amountText is a warning's amount at the part, when it has one.
-func amountText(w pantograph.Problem) string {
+// amountText is a warning's amount at the part, in u, when it has one.
+func amountText(w pantograph.Problem, u pantograph.Units) string {
 	if !w.HasAmount {
 		return ""
 	}
-	return fmt.Sprintf("  [%s mm at the part]", num(w.Amount))
+	return fmt.Sprintf("  [%s at the part]", u.Length(w.Amount))
 }
 
 // suffix is the plural ending for n things.
@@ -306,8 +306,8 @@ func abs(v float64) float64 {
 	return v
 }
 
-// at formats a point to three decimals.
-func at(v geom.Vec) string { return point(v.X, v.Y) }
+// at formats a point in u.
+func at(u pantograph.Units, v geom.Vec) string { return u.Point(v.X, v.Y) }
 
 const planSynopsis = `panto plan PART --ratio R --cutter D [--stylus D] [--machine FILE] [--mirror] [--rotate DEG] [--accept-loss] [--mill-holes] [--datum X,Y] [--thickness MM] [--json]`
 

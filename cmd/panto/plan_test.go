@@ -3,6 +3,7 @@ package main
 import (
 	"encoding/json"
 	"math"
+	"os"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -145,5 +146,33 @@ func TestPlanJSON(t *testing.T) {
 	// derived: cutter 0.5 − slot 0.4.
 	if len(got.Warnings) != 1 || got.Warnings[0].Feature != "narrow" || got.Warnings[0].Amount == nil || math.Abs(*got.Warnings[0].Amount-0.1) > 1e-9 {
 		t.Errorf("warnings got %+v, want one about narrow of 0.1 mm", got.Warnings)
+	}
+}
+
+// TestInchThroughout plans and sheets the inch coupon on the inch machine: every length the
+// machinist reads is in inches, none in millimetres.
+func TestInchThroughout(t *testing.T) {
+	dir := t.TempDir()
+	args := []string{"../../samples/calibration-coupon.toml", "--ratio", "4", "--cutter", "1/32in",
+		"--machine", "../../samples/machines/inch-engraver.machine.toml"}
+	code, out, errOut := runPanto(append([]string{"plan"}, args...)...)
+	if code != exitOK {
+		t.Fatalf("plan: exit %d: %s", code, errOut)
+	}
+	code, _, errOut2 := runPanto(append([]string{"sheet", "-o", dir, "--date", "2026-12-01"}, args...)...)
+	if code != exitOK {
+		t.Fatalf("sheet: exit %d: %s", code, errOut2)
+	}
+	txt, err := os.ReadFile(filepath.Join(dir, "sheet.txt"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for name, text := range map[string]string{"plan": out + errOut, "sheet.txt": string(txt)} {
+		if i := strings.Index(text, " mm"); i >= 0 {
+			t.Errorf("%s speaks mm: ...%s...", name, text[max(0, i-60):min(len(text), i+20)])
+		}
+		if !strings.Contains(text, "Ø0.03125 in") {
+			t.Errorf("%s does not give the 1/32 in cutter as Ø0.03125 in", name)
+		}
 	}
 }

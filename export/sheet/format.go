@@ -67,7 +67,7 @@ func header(s pantograph.Sheet) [][2]string {
 
 // dialLine describes a dial: its screw and division, which way it moves its table, what it is
 // set to at the datum and how far to wind back after a reversal.
-func dialLine(d pantograph.DialInfo) string {
+func dialLine(d pantograph.DialInfo, u pantograph.Units) string {
 	if !d.Stated {
 		return "not stated in the machine file: set positions by measuring"
 	}
@@ -78,8 +78,9 @@ func dialLine(d pantograph.DialInfo) string {
 	if d.Reversed {
 		way += " (reversed)"
 	}
-	return fmt.Sprintf("%s %s / %d div = %s %s per div (%s mm at the part); %s; at the datum set %d t 0 div; wind back %s %s after a reversal",
-		num(d.Pitch), d.Units, d.Divisions, fine(d.Division), d.Units, fine(d.AtPart), way, d.DatumTurns, fine(d.BackOff), d.Units)
+	return fmt.Sprintf("%s %s / %d div = %s %s per div (%s %s at the part); %s; at the datum set %d t 0 div; wind back %s %s after a reversal",
+		num(d.Pitch), d.Units, d.Divisions, fine(d.Division), d.Units, numfmt.Trim(u.FromMM(d.AtPart), 5), u.Word(), way,
+		d.DatumTurns, fine(d.BackOff), d.Units)
 }
 
 // fine formats a small quantity to four decimals without trailing zeros (0.0001 in is a

@@ -152,7 +152,7 @@ func layout(f *flow, s pantograph.Sheet) {
 	f.rule()
 	f.text(0, sizeHead, true, "Dials")
 	for _, d := range s.Dials.List() {
-		f.labelled(d.Name, dialLine(d))
+		f.labelled(d.Name, dialLine(d, s.Units))
 	}
 	f.rule()
 	f.list("Warnings", s.Warnings, "None: every feature comes out as drawn.")

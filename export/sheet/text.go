@@ -31,7 +31,7 @@ func EncodeText(w io.Writer, s pantograph.Sheet) error {
 	}
 	bw.WriteString("\nDials\n")
 	for _, d := range s.Dials.List() {
-		line("  ", 8, padRight(d.Name, 8)+dialLine(d))
+		line("  ", 8, padRight(d.Name, 8)+dialLine(d, s.Units))
 	}
 	section(bw, line, "Warnings", s.Warnings, "none: every feature comes out as drawn")
 	section(bw, line, "Safety", s.Cautions, "")
