@@ -39,6 +39,7 @@ const (
 	shopTables   = "shop speed tables for HSS (low end of each range), carbide about 2× HSS (tool makers' catalogues)"
 	likeBrass    = "rule of thumb: cut like brass (no published row; from memory)"
 	likeToolStel = "rule of thumb: cut as slowly as tool steel (no published row; from memory)"
+	likeMild     = "rule of thumb: cut as mild steel (no published row; from memory)"
 )
 
 // builtinMaterials is the speed table panto starts from. HSS drilling ~76, ~61, ~34, ~18 m/min
@@ -60,7 +61,7 @@ func builtinMaterials() []StockMaterial {
 		row("nickel silver", br, 61, 45, 0.5, likeBrass),
 		row("mild steel", ms, 34, 21, 0.25, shopTables),
 		row("steel", ms, 34, 21, 0.25, shopTables),
-		row("iron", ms, 34, 21, 0.25, likeBrass+"; as mild steel"),
+		row("iron", ms, 34, 21, 0.25, likeMild),
 		row("tool steel", ts, 18, 12, 0.1, shopTables),
 		row("silver steel", ts, 18, 12, 0.1, shopTables),
 		row("gauge plate", ts, 18, 12, 0.1, shopTables),

@@ -18,6 +18,7 @@ Usage:
   panto make PART --ratio R --cutter D -o DIR write the template plate (STL), sheet and drawings
                                               (SVG, PDF, and DXF for a laser or CNC router)
   panto help [COMMAND]                        show this help, or a command's help
+  panto help materials [--machine FILE]       the stock materials and their cutting speeds
   panto --version                             show panto's version
 
 A part file is a TOML description of the part in its own drawing units: see the files in
@@ -120,6 +121,8 @@ func runHelp(args []string, stdout io.Writer) error {
 		_, err = fmt.Fprint(stdout, sheetUsage)
 	case args[0] == "make":
 		_, err = fmt.Fprint(stdout, makeUsage)
+	case args[0] == "materials":
+		return runMaterialsHelp(args[1:], stdout)
 	default:
 		return &exitError{exitUsage, fmt.Sprintf("panto: no help for %q: there is no such command", args[0])}
 	}

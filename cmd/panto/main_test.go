@@ -7,6 +7,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"regexp"
 	"strings"
 	"testing"
 )
@@ -185,5 +186,39 @@ func checkGolden(t *testing.T, path, out string) {
 	}
 	if out != string(want) {
 		t.Errorf("got:\n%s\nwant:\n%s", out, want)
+	}
+}
+
+// TestMaterials: the speed table is listed with its sources, a machine file adds its own
+// rows, and a material not in the table stops plan, sheet and make with the known ones named.
+func TestMaterials(t *testing.T) {
+	code, out, _ := runPanto("help", "materials")
+	// shop speed tables: brass drilling ~61 m/min with HSS, carbide about twice
+	if code != exitOK || !strings.Contains(out, "brass") || !regexp.MustCompile(`brass +brass and bronze +61 +45 +122`).MatchString(out) ||
+		!strings.Contains(out, "shop speed tables") || !strings.Contains(out, "rule of thumb") {
+		t.Errorf("help materials: exit %d\n%s", code, out)
+	}
+	machine := filepath.Join(t.TempDir(), "m.machine.toml")
+	src := "[ratio]\nmin = 2\nmax = 10\n[[stock_material]]\nname = \"boxwood\"\nhss_drill = 60\nhss_mill = 50\n"
+	if err := os.WriteFile(machine, []byte(src), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if code, out, _ := runPanto("help", "materials", "--machine", machine); code != exitOK || !strings.Contains(out, "boxwood") {
+		t.Errorf("help materials --machine: exit %d\n%s", code, out)
+	}
+	sample := "../../samples/pump-port-plate.toml"
+	for _, cmd := range []string{"plan", "sheet", "make"} {
+		args := []string{cmd, sample, "--ratio", "10", "--cutter", "0.5", "--material", "boxwood", "-o", t.TempDir()}
+		if cmd == "plan" {
+			args = args[:len(args)-2]
+		}
+		code, _, errOut := runPanto(args...)
+		if code != exitUsage || !strings.Contains(errOut, `"boxwood" is not in the speed table`) || !strings.Contains(errOut, "mild steel") {
+			t.Errorf("%s with an unknown material: exit %d\n%s", cmd, code, errOut)
+		}
+		args = append(args, "--machine", machine)
+		if code, _, errOut := runPanto(args...); code != exitOK {
+			t.Errorf("%s with the machine file's boxwood: exit %d\n%s", cmd, code, errOut)
+		}
 	}
 }

@@ -34,6 +34,7 @@ import (
 //	[[cutter]]    name, diameter, material ("hss" or "carbide"), flutes
 //	[[drill]]     name, diameter, material
 //	[printer]     bed = [x, y], height, scale = [sx, sy], hole_growth
+//	[[stock_material]] name, hss_drill, hss_mill, ... (see machine_materials.go)
 //
 // Only [ratio] is required of the file, because a pantograph mill is its ratio: without it no
 // template size can be checked against the machine, and a ratio the linkage cannot be set to
@@ -44,7 +45,7 @@ import (
 
 // machineTopKeys are the keys a machine file may have outside any table.
 var machineTopKeys = []string{"name", "units", "ratio", "copy_table", "work_table", "dials",
-	"spindle", "stylus", "cutter", "drill", "printer"}
+	"spindle", "stylus", "cutter", "drill", "printer", "stock_material"}
 
 // dialKeys are the dials under [dials], and dialFields the keys of each.
 var (
@@ -85,7 +86,7 @@ func ReadMachine(name string, src []byte) (pantograph.Machine, error) {
 	mc := pantograph.Machine{Source: name, Units: pantograph.MM}
 	steps := []func(table, *pantograph.Machine) error{
 		readMachineHead, readRatio, readTables, readDials, readSpindle, readStyli, readCutters,
-		readDrills, readPrinter,
+		readDrills, readPrinter, readStockMaterials,
 	}
 	if err := top.checkKeys(machineTopKeys...); err != nil {
 		return pantograph.Machine{}, err

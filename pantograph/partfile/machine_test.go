@@ -3,6 +3,7 @@ package partfile
 import (
 	"errors"
 	"fmt"
+	"math"
 	"os"
 	"path/filepath"
 	"slices"
@@ -141,6 +142,33 @@ func checkMachine(t *testing.T, got, want pantograph.Machine) {
 }
 
 // TestReadMachineDefaults reads the smallest machine file: only [ratio].
+// TestReadMachineMaterials reads [[stock_material]] rows: speeds in m/min in a metric file and
+// in surface feet a minute in an inch one (derived: 200 SFM × 0.3048 = 60.96 m/min); carbide
+// twice HSS and a step share of 0.25 when not given.
+func TestReadMachineMaterials(t *testing.T) {
+	for _, tc := range []struct {
+		units string
+		drill float64
+	}{{"mm", 200}, {"in", 200 * 0.3048}} {
+		src := "units = \"" + tc.units + "\"\n" + ratioHead + "[[stock_material]]\nname = \"Boxwood\"\nhss_drill = 200\nhss_mill = 100\n"
+		m, err := ReadMachine("m.toml", []byte(src))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if len(m.Materials) != 1 {
+			t.Fatalf("got %d materials, want 1", len(m.Materials))
+		}
+		r := m.Materials[0]
+		if r.Name != "boxwood" || math.Abs(r.HSSDrill-tc.drill) > 1e-9 || math.Abs(r.CarbideDrill-2*tc.drill) > 1e-9 ||
+			r.StepShare != 0.25 || !strings.Contains(r.Source, "m.toml") {
+			t.Errorf("%s file: got %+v, want boxwood at %v m/min", tc.units, r, tc.drill)
+		}
+		if got, err := pantograph.MaterialsFor(&m).Resolve("seasoned boxwood"); err != nil || got.Name != "boxwood" {
+			t.Errorf("%s file: resolving boxwood: %+v %v", tc.units, got, err)
+		}
+	}
+}
+
 func TestReadMachineDefaults(t *testing.T) {
 	m := readMachine(t, ratioHead)
 	want := pantograph.Machine{Source: "m.toml", Units: pantograph.MM, Ratio: pantograph.RatioRange{Min: 2, Max: 10}}
@@ -238,6 +266,17 @@ func TestReadMachineErrors(t *testing.T) {
 		{"fixing spacing zero", ratioHead + "[copy_table]\nfixing_spacing = [100, 0]\n", 5,
 			"key fixing_spacing (entry 2): must be greater than 0, got 0"},
 		{"fixing size text", ratioHead + "[copy_table]\nfixing_size = \"M6\"\n", 5, `key fixing_size: must be a number, got text "M6"`},
+		{"pivot word", "[ratio]\nmin = 2\nmax = 10\npivot = \"middle\"\n", 4, `key pivot: must be "end"`},
+		{"count_up word", ratioHead + "[dials.copy_y]\npitch = 2\ndivisions = 100\ncount_up = \"right\"\n", 7,
+			`key count_up: says which way counting up moves the table: "away" or "toward", got "right"`},
+		{"count_up and reversed", ratioHead + "[dials.work_x]\npitch = 1\ndivisions = 50\ncount_up = \"left\"\nreversed = true\n", 8,
+			`key reversed: give count_up = "right" or "left", not reversed as well`},
+		{"material without name", ratioHead + "[[stock_material]]\nhss_drill = 60\nhss_mill = 50\n", 4, "name missing"},
+		{"material without speed", ratioHead + "[[stock_material]]\nname = \"boxwood\"\nhss_mill = 50\n", 4, "hss_drill missing"},
+		{"material too fast", ratioHead + "[[stock_material]]\nname = \"boxwood\"\nhss_drill = 6000\nhss_mill = 50\n", 6,
+			"key hss_drill: must be a surface speed of at most 2000 m/min, got 6000"},
+		{"material step share", ratioHead + "[[stock_material]]\nname = \"boxwood\"\nhss_drill = 60\nhss_mill = 50\nstep_share = 2\n", 8,
+			"key step_share: is the depth of a pass as a share of the cutter's diameter, at most 1, got 2"},
 		// 6 read as inches is 152.4 mm, far over the 25.4 mm limit
 		{"fixing size in the wrong units", `units = "in"` + "\n" + ratioHead + "[copy_table]\nfixing_size = 6\n", 6,
 			"key fixing_size: must be the clamp bolts' diameter, at most 25.4 mm (1 in), got 152.4 mm"},
