@@ -42,7 +42,7 @@ const (
 // PlateOptions are the choices the machinist makes about the plate.
 type PlateOptions struct {
 	Seat  SeatKind   // "" means cone for a pointed stylus, bore for a round one
-	Style PlateStyle // "" means StyleWall
+	Style PlateStyle // "" means StyleGroove for a pointed stylus, StyleWall for a round one
 	// FixingSpacing is the distance in mm between the centres of the fixing slots along X, to
 	// suit the copy table's clamps or T-slots. 0 takes the machine file's fixing_spacing, or,
 	// when it states none, puts a slot near each corner. It wins over the machine file.
@@ -169,9 +169,31 @@ type PlateLabel struct {
 // ErrPlate is wrapped by BuildPlate and Plate.Terrace when the plate cannot be made.
 var ErrPlate = errors.New("template plate")
 
+// ErrPointedWall is returned by PlateOptions.Check for a raised-wall plate traced with a
+// pointed stylus: a point cannot bear on a wall, it rides up over it.
+var ErrPointedWall = errors.New("a pointed stylus cannot bear on a raised wall, it rides up over it: " +
+	"use the groove style (--style groove), whose channels hold the point")
+
+// Check reports whether the options suit plan p: a pointed stylus that traces edges needs the
+// groove style.
+func (o PlateOptions) Check(p Plan) error {
+	if o.Style != StyleWall {
+		return nil
+	}
+	for _, f := range p.Features {
+		if f.Tip == TipPointed && f.Method == Traced {
+			return ErrPointedWall
+		}
+	}
+	return nil
+}
+
 // BuildPlate designs the template plate for plan p on machine m (nil when there is no machine
 // file: no printer corrections).
 func BuildPlate(p Plan, m *Machine, o PlateOptions) (Plate, error) {
+	if err := o.Check(p); err != nil {
+		return Plate{}, err
+	}
 	d := newPlateDesign(p, m, o)
 	if err := d.layout(); err != nil {
 		return Plate{}, err
@@ -219,6 +241,9 @@ func newPlateDesign(p Plan, m *Machine, o PlateOptions) *plateDesign {
 	}
 	if o.Style == "" {
 		d.o.Style = StyleWall
+		if tip == TipPointed {
+			d.o.Style = StyleGroove
+		}
 	}
 	if o.Seat == "" {
 		d.o.Seat = SeatBore

@@ -1,7 +1,9 @@
 package pantograph_test
 
 import (
+	"errors"
 	"math"
+	"strings"
 	"testing"
 
 	"panto/geom"
@@ -25,6 +27,19 @@ func squarePlan(stylus float64, tip pantograph.Tip) pantograph.Plan {
 	return p
 }
 
+// TestPlateRefusesPointedWall: a pointed stylus that traces edges cannot bear on a raised wall.
+func TestPlateRefusesPointedWall(t *testing.T) {
+	p := squarePlan(5, pantograph.TipPointed)
+	p.Features[0].Method = pantograph.Traced
+	_, err := pantograph.BuildPlate(p, nil, pantograph.PlateOptions{Style: pantograph.StyleWall})
+	if !errors.Is(err, pantograph.ErrPointedWall) || !strings.Contains(err.Error(), "--style groove") {
+		t.Errorf("got %v, want the wall refused for a pointed stylus with --style groove suggested", err)
+	}
+	if _, err := pantograph.BuildPlate(p, nil, pantograph.PlateOptions{}); err != nil {
+		t.Errorf("the default style for a pointed stylus: %v", err)
+	}
+}
+
 func TestPlateRules(t *testing.T) {
 	printer := &pantograph.Machine{Printer: pantograph.Printer{ScaleX: 1.004, ScaleY: 0.997, HoleGrowth: 0.3}}
 	tests := []struct {
@@ -44,8 +59,9 @@ func TestPlateRules(t *testing.T) {
 		{"small stylus, 3 mm walls", 2, pantograph.TipRound, pantograph.PlateOptions{}, nil, 3, pantograph.SeatBore, 2.1, 3, 8},
 		// hole growth adds to the bore (machine file's correction).
 		{"bore with hole growth", 5, pantograph.TipRound, pantograph.PlateOptions{}, printer, 5, pantograph.SeatBore, 5.4, 5, 10},
-		// cone: rim R × drill = 6 mm (within 2..8), 90° so depth = rim / 2.
-		{"pointed stylus, cone", 5, pantograph.TipPointed, pantograph.PlateOptions{}, nil, 5, pantograph.SeatCone, 6, 3, 10},
+		// cone: rim R × drill = 6 mm (within 2..8), 90° so depth = rim / 2; a pointed stylus gets
+		// the groove style, 5 + 5 mm and the 1 mm marks.
+		{"pointed stylus, cone", 5, pantograph.TipPointed, pantograph.PlateOptions{}, nil, 5, pantograph.SeatCone, 6, 3, 11},
 		{"cone chosen for a round stylus", 4, pantograph.TipRound, pantograph.PlateOptions{Seat: pantograph.SeatCone}, nil, 4, pantograph.SeatCone, 6, 3, 9},
 		// groove style: base 5 + wall height, nothing stands above it but the marks (1 mm).
 		{"groove style", 5, pantograph.TipRound, pantograph.PlateOptions{Style: pantograph.StyleGroove}, nil, 5, pantograph.SeatBore, 5.1, 5, 11},

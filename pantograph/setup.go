@@ -158,6 +158,12 @@ func ratioWarning(r float64, rr RatioRange) (Problem, bool) {
 // changes the plan.
 func toolWarnings(p Plan, m *Machine) []Problem {
 	var ws []Problem
+	if p.Setup.Tip != "" && len(m.Styli) > 0 {
+		if _, ok := ChooseStylus(*m, p.Setup.Ratio, p.Setup.Cutter, p.Setup.Tip); !ok {
+			ws = append(ws, Problem{Severity: Warning, Message: fmt.Sprintf(
+				"the machine file lists no %s stylus: the plan assumes one", p.Setup.Tip)})
+		}
+	}
 	styli, cutters := map[float64]bool{}, map[float64]bool{}
 	for _, f := range p.Features {
 		if f.Status == StatusLost {

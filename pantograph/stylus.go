@@ -24,6 +24,14 @@ func MatchedCutter(ratio, stylus float64) float64 { return stylus / ratio }
 // pass 0 for its diameter.
 func Compensation(ratio, cutter, stylus float64) float64 { return ratio*cutter/2 - stylus/2 }
 
+// tipOrRound is the stylus's tip, round when the machine file does not say.
+func (s Stylus) tipOrRound() Tip {
+	if s.Tip == "" {
+		return TipRound
+	}
+	return s.Tip
+}
+
 // TracingDiameter is the diameter the stylus traces with: its diameter when round, 0 when
 // pointed, because a point follows the template's line itself.
 func (s Stylus) TracingDiameter() float64 {
@@ -85,20 +93,28 @@ type StylusChoice struct {
 	Direction    Direction
 }
 
-// ChooseStylus picks, from the styli the machine lists, the one whose tracing diameter is
-// nearest to R·d_c, and works out the compensation it needs. Ties go to the larger stylus (it
-// is stiffer and less likely to bend against the template), then to the one listed first. It
-// returns false when the machine lists no styli, or when ratio or cutter is not greater than 0.
-func ChooseStylus(m Machine, ratio, cutter float64) (StylusChoice, bool) {
-	if len(m.Styli) == 0 || !(ratio > 0) || !(cutter > 0) {
+// ChooseStylus picks, from the styli the machine lists with the given tip ("" for any), the one
+// whose tracing diameter is nearest to R·d_c, and works out the compensation it needs. Ties go
+// to the larger stylus (it is stiffer and less likely to bend against the template), then to
+// the one listed first; among pointed styli, which all trace with their point, the first
+// listed. It returns false when the machine lists no such stylus, or when ratio or cutter is
+// not greater than 0.
+func ChooseStylus(m Machine, ratio, cutter float64, tip Tip) (StylusChoice, bool) {
+	if !(ratio > 0) || !(cutter > 0) {
 		return StylusChoice{}, false
 	}
 	want := MatchedStylus(ratio, cutter)
-	best := 0
-	for i, s := range m.Styli[1:] {
-		if better(s, m.Styli[best], want) {
-			best = i + 1
+	best := -1
+	for i, s := range m.Styli {
+		if tip != "" && s.tipOrRound() != tip {
+			continue
 		}
+		if best < 0 || better(s, m.Styli[best], want) {
+			best = i
+		}
+	}
+	if best < 0 {
+		return StylusChoice{}, false
 	}
 	s := m.Styli[best]
 	d := Compensation(ratio, cutter, s.TracingDiameter())

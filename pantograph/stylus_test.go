@@ -91,7 +91,7 @@ func TestChooseStylus(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			c, ok := ChooseStylus(tc.m, tc.ratio, tc.cutter)
+			c, ok := ChooseStylus(tc.m, tc.ratio, tc.cutter, "")
 			if !ok {
 				t.Fatal("got no choice")
 			}
@@ -122,7 +122,7 @@ func TestChooseStylusNone(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			if c, ok := ChooseStylus(tc.m, tc.ratio, tc.cutter); ok {
+			if c, ok := ChooseStylus(tc.m, tc.ratio, tc.cutter, ""); ok {
 				t.Errorf("got %+v, want no choice", c)
 			}
 		})
@@ -140,7 +140,7 @@ func TestChooseStylusNearest(t *testing.T) {
 			m.Styli = append(m.Styli, Stylus{Diameter: 0.5 + float64(rng.IntN(20))/4, Tip: TipRound})
 		}
 		ratio, cutter := 2+float64(rng.IntN(9)), 0.1+float64(rng.IntN(10))/10
-		c, _ := ChooseStylus(m, ratio, cutter)
+		c, _ := ChooseStylus(m, ratio, cutter, "")
 		for _, s := range m.Styli {
 			if math.Abs(s.Diameter-c.Matched) < math.Abs(c.Stylus.Diameter-c.Matched)-tieTol {
 				t.Fatalf("seed %d, case %d: chose %v for %v but %v is nearer", seed, i, c.Stylus.Diameter, c.Matched, s.Diameter)
@@ -154,7 +154,7 @@ func ExampleChooseStylus() {
 		{Name: "3 mm", Diameter: 3, Tip: TipRound},
 		{Name: "4 mm", Diameter: 4, Tip: TipRound},
 	}}
-	c, _ := ChooseStylus(m, 10, 0.43) // a 0.43 mm cutter at 10:1 wants a 4.3 mm stylus
+	c, _ := ChooseStylus(m, 10, 0.43, "") // a 0.43 mm cutter at 10:1 wants a 4.3 mm stylus
 	fmt.Printf("%s stylus, δ = %+.3f mm: %s\n", c.Stylus.Name, c.Compensation, c.Direction)
 	// Output: 4 mm stylus, δ = +0.150 mm: the template's outline grows and its openings shrink
 }
@@ -196,5 +196,29 @@ func TestDirectionWords(t *testing.T) {
 		if got := tc.d.String(); !strings.Contains(got, tc.text) {
 			t.Errorf("%d.String() = %q, want it to say %q", tc.d, got, tc.text)
 		}
+	}
+}
+
+// TestChooseStylusByTip: asked for a pointed stylus the machine's pointed one is chosen, even
+// where a round one is nearer the matched size, and its δ is R·r_c (derived: 10 × 0.25 = 2.5);
+// asked for a round one a pointed stylus is never chosen; asked for a tip the machine lacks,
+// there is no choice.
+func TestChooseStylusByTip(t *testing.T) {
+	m := Machine{Styli: []Stylus{
+		{Name: "a5", Diameter: 5, Tip: TipRound},
+		{Name: "point", Diameter: 3, Tip: TipPointed},
+		{Name: "plain", Diameter: 4}, // no tip stated: round
+	}}
+	if c, ok := ChooseStylus(m, 10, 0.5, TipPointed); !ok || c.Stylus.Name != "point" || math.Abs(c.Compensation-2.5) > 1e-12 {
+		t.Errorf("pointed: got %+v %v, want the point with δ 2.5", c, ok)
+	}
+	if c, ok := ChooseStylus(m, 2, 0.1, TipRound); !ok || c.Stylus.Tip == TipPointed {
+		t.Errorf("round: got %+v, want a round stylus", c)
+	}
+	if c, ok := ChooseStylus(m, 10, 0.4, TipRound); !ok || c.Stylus.Name != "plain" {
+		t.Errorf("round, untipped: got %+v, want the 4 mm stylus whose tip the file leaves unsaid", c)
+	}
+	if _, ok := ChooseStylus(Machine{Styli: m.Styli[:1]}, 10, 0.5, TipPointed); ok {
+		t.Errorf("a machine with no pointed stylus gave a pointed choice")
 	}
 }

@@ -69,7 +69,7 @@ func (pl planner) stylusFor(cutter float64) (float64, Tip) {
 		return pl.setup.Stylus, tip
 	}
 	if pl.machine != nil {
-		if c, ok := ChooseStylus(*pl.machine, pl.setup.Ratio, cutter); ok {
+		if c, ok := ChooseStylus(*pl.machine, pl.setup.Ratio, cutter, pl.setup.Tip); ok {
 			if c.Stylus.Tip != "" {
 				tip = c.Stylus.Tip
 			}

@@ -51,7 +51,7 @@ func runMake(args []string, stdout, stderr io.Writer) error {
 	addPlanFlags(fl, &o)
 	addOutputFlags(fl, &mo.outputFlags, "")
 	fl.StringVar(&mo.seat, "seat", "", "seats for drilled holes: cone or bore")
-	fl.StringVar(&mo.style, "style", "wall", "how traced edges are made: wall or groove")
+	fl.StringVar(&mo.style, "style", "", "how traced edges are made: wall or groove (default: groove for a pointed stylus, else wall)")
 	fl.Float64Var(&mo.fixingSpacing, "fixing-spacing", 0, "distance between fixing slots, mm")
 	fl.Var(&mo.kerfLength, "kerf", "width the laser or router cuts (mm, or give in), for template.dxf")
 	if done, err := parseOne("make", partOrDrawing, makeSynopsis, fl, args, &o.help, stdout); done {
@@ -80,7 +80,7 @@ func (mo makeFlags) plateOptions() (pantograph.PlateOptions, error) {
 	switch {
 	case p.Seat != "" && p.Seat != pantograph.SeatCone && p.Seat != pantograph.SeatBore:
 		return p, fmt.Errorf("--seat must be cone or bore, got %q", mo.seat)
-	case p.Style != pantograph.StyleWall && p.Style != pantograph.StyleGroove:
+	case p.Style != "" && p.Style != pantograph.StyleWall && p.Style != pantograph.StyleGroove:
 		return p, fmt.Errorf("--style must be wall or groove, got %q", mo.style)
 	case !(mo.fixingSpacing >= 0):
 		return p, fmt.Errorf("--fixing-spacing must be 0 (a slot at each corner) or more, got %g", mo.fixingSpacing)
@@ -100,6 +100,9 @@ func makeAll(path string, setup pantograph.Setup, o planFlags, mo makeFlags,
 	p := pj.plan
 	if !p.Done() {
 		return planOutcome("make", p)
+	}
+	if err := plate.Check(p); err != nil {
+		return usagef("make", "%v", err)
 	}
 	j := makeJob{planned: pj, plate: plate, paper: mo.paper, date: mo.date, kerf: mo.kerf}
 	var files []outputFile
@@ -199,7 +202,7 @@ for a drawing) and writes into the folder DIR everything needed at the machine:
 
 The plate is a flat base with a fixing slot at each corner, or pairs of slots at the machine
 file's [copy_table] fixing_spacing (--fixing-spacing overrides its X spacing), and a front strip with the title, a check bar and a test square.
-With --style wall (the default) the profile stands up as an island the stylus runs round,
+With --style wall (the default for a round stylus) the profile stands up as an island the stylus runs round,
 and openings and pockets are sunk into it; edges stand one stylus diameter high, and at
 least 3 mm, so a round-nosed stylus bears on its straight side and cannot ride over. With
 --style groove the stylus runs in channels one stylus diameter plus 0.2 mm wide cut along
@@ -222,7 +225,8 @@ temporary name and renamed, so an interrupted run leaves no half file.
 Flags (besides the plan flags):
   -o, --out DIR              folder to write into (required)
       --seat cone|bore       seats for drilled holes (default: cone for a pointed stylus)
-      --style wall|groove    raised walls or channels for traced edges (default wall)
+      --style wall|groove    raised walls or channels for traced edges (default: groove for
+                             a pointed stylus, which cannot bear on a wall; else wall)
       --fixing-spacing MM    distance between fixing slots along X (default: the machine
                              file's fixing_spacing, else a slot at each corner)
       --kerf MM              width the laser or router cuts, allowed for in template.dxf

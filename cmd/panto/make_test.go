@@ -129,3 +129,22 @@ func TestMakeUsage(t *testing.T) {
 		t.Errorf("bad usage wrote %d files", len(entries))
 	}
 }
+
+// TestPointedStylus: --tip pointed with a machine file takes its pointed stylus, the plate is
+// grooved for it, and a raised-wall plate is refused with the groove style suggested.
+func TestPointedStylus(t *testing.T) {
+	base := []string{"../../samples/pump-port-plate.toml", "--ratio", "8", "--cutter", "0.5", "--tip", "pointed",
+		"--machine", "../../samples/machines/bench-pantograph.machine.toml"}
+	code, out, errOut := runPanto(append([]string{"plan"}, base...)...)
+	if code != exitOK || !strings.Contains(out, "pointed stylus Ø3 mm") {
+		t.Errorf("plan: exit %d, want the machine's pointed Ø3 stylus:\n%s%s", code, out, errOut)
+	}
+	code, out, errOut = runPanto(append([]string{"make", "-o", t.TempDir()}, base...)...)
+	if code != exitOK || !strings.Contains(out, "channels along the stylus path") {
+		t.Errorf("make: exit %d, want a grooved plate:\n%s%s", code, out, errOut)
+	}
+	code, _, errOut = runPanto(append([]string{"make", "-o", t.TempDir(), "--style", "wall"}, base...)...)
+	if code != exitUsage || !strings.Contains(errOut, "--style groove") {
+		t.Errorf("make --style wall: exit %d, want 2 suggesting --style groove:\n%s", code, errOut)
+	}
+}

@@ -153,7 +153,7 @@ func (r *stylusReport) work() {
 		r.warnings = append(r.warnings, fmt.Sprintf("%s cannot be set to %g:1 (its ratio: %s)",
 			machineName(*r.machine), a.ratio, r.machine.Ratio))
 	}
-	c, ok := pantograph.ChooseStylus(*r.machine, a.ratio, a.cutter)
+	c, ok := pantograph.ChooseStylus(*r.machine, a.ratio, a.cutter, "")
 	if !ok {
 		r.failure = fmt.Sprintf("%s lists no styli: add a [[stylus]] table for each one you own", r.machine.Source)
 		return
