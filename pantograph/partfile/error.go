@@ -20,6 +20,17 @@ type Error struct {
 	Msg   string
 }
 
+// Errors is several mistakes of one file, in line order: every unknown key a reading meets.
+type Errors []*Error
+
+func (e Errors) Error() string {
+	lines := make([]string, len(e))
+	for i, x := range e {
+		lines[i] = x.Error()
+	}
+	return strings.Join(lines, "\n")
+}
+
 func (e *Error) Error() string {
 	var b strings.Builder
 	b.WriteString(e.File)

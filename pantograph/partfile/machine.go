@@ -88,13 +88,15 @@ func ReadMachine(name string, src []byte) (pantograph.Machine, error) {
 		readMachineHead, readRatio, readTables, readDials, readSpindle, readStyli, readCutters,
 		readDrills, readPrinter, readStockMaterials,
 	}
-	if err := top.checkKeys(machineTopKeys...); err != nil {
-		return pantograph.Machine{}, err
-	}
+	top.checkKeys(machineTopKeys...)
+	var err error
 	for _, step := range steps {
-		if err := step(top, &mc); err != nil {
-			return pantograph.Machine{}, err
+		if err = step(top, &mc); err != nil {
+			break
 		}
+	}
+	if err = r.finish(err); err != nil {
+		return pantograph.Machine{}, err
 	}
 	return mc, nil
 }

@@ -409,8 +409,10 @@ func FuzzReadMachine(f *testing.F) {
 	f.Fuzz(func(t *testing.T, src []byte) {
 		m, err := ReadMachine("fuzz.toml", src)
 		if err != nil {
-			if _, ok := err.(*Error); !ok {
-				t.Fatalf("got error of type %T, want *partfile.Error: %v", err, err)
+			_, one := err.(*Error)
+			_, several := err.(Errors)
+			if !one && !several {
+				t.Fatalf("got error of type %T, want *partfile.Error or Errors: %v", err, err)
 			}
 			return
 		}

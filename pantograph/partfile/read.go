@@ -61,20 +61,40 @@ func Read(name string, src []byte) (pantograph.Part, error) {
 	}
 	r := &reader{file: name, lines: indexLines(string(src)), scale: 1}
 	top := table{r: r, m: m}
-	if err := top.checkKeys(topKeys...); err != nil {
-		return pantograph.Part{}, err
-	}
+	r.checkTables(top)
 	p := pantograph.Part{Source: name, Units: pantograph.MM}
-	if err := r.readHead(top, &p); err != nil {
-		return pantograph.Part{}, err
+	err := r.readHead(top, &p)
+	if err == nil {
+		err = r.readProfile(top, &p)
 	}
-	if err := r.readProfile(top, &p); err != nil {
-		return pantograph.Part{}, err
+	if err == nil {
+		err = r.readFeatures(top, &p)
 	}
-	if err := r.readFeatures(top, &p); err != nil {
+	if err = r.finish(err); err != nil {
 		return pantograph.Part{}, err
 	}
 	return p, nil
+}
+
+// checkTables notes the unknown keys of every table before anything is read, so that one
+// reading reports them all even when a later mistake stops it.
+func (r *reader) checkTables(top table) {
+	top.checkKeys(topKeys...)
+	for key, known := range map[string][]string{"stock": {"material", "thickness"}, "profile": shapeKeys} {
+		if m, ok := top.m[key].(map[string]any); ok {
+			table{r: r, path: key, label: "[" + key + "]", m: m}.checkKeys(known...)
+		}
+	}
+	for _, k := range featureOrder {
+		list, _ := top.m[string(k)].([]map[string]any)
+		for i, m := range list {
+			label := fmt.Sprintf("[[%s]] #%d", k, i+1)
+			if name, ok := m["name"].(string); ok {
+				label = pantograph.Feature{Kind: k, Name: name}.Label()
+			}
+			table{r: r, path: fmt.Sprintf("%s#%d", k, i), label: label, m: m}.checkKeys(featureKeys[k]...)
+		}
+	}
 }
 
 // readHead reads name, units, datum and [stock].

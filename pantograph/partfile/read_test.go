@@ -268,7 +268,11 @@ func wantOf(t *testing.T, src string) (int, string) {
 func firstMistake(file string, src []byte) (int, string) {
 	p, err := Read(file, src)
 	var e *Error
-	if errors.As(err, &e) {
+	var es Errors
+	if errors.As(err, &es) {
+		e = es[0]
+	}
+	if e != nil || errors.As(err, &e) {
 		return e.Line, e.Error()
 	}
 	if err != nil {
@@ -280,6 +284,20 @@ func firstMistake(file string, src []byte) (int, string) {
 		}
 	}
 	return 0, ""
+}
+
+// TestReadEveryUnknownKey: one reading reports every misspelt key of the file, in line order.
+func TestReadEveryUnknownKey(t *testing.T) {
+	_, err := ReadFile("../../testdata/parts/bad/three-typos.toml")
+	var errs Errors
+	if !errors.As(err, &errs) || len(errs) != 3 {
+		t.Fatalf("got %v, want three unknown keys", err)
+	}
+	for i, want := range []string{":8: unknown key `thicknes`", ":15: unknown key `diamter`", ":21: unknown key `centre`"} {
+		if !strings.Contains(errs[i].Error(), want) {
+			t.Errorf("mistake %d: got %q, want %q", i+1, errs[i].Error(), want)
+		}
+	}
 }
 
 func TestReadErrors(t *testing.T) {

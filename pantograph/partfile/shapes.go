@@ -114,8 +114,8 @@ func (l loc) inline(v any, known ...string) (map[string]any, error) {
 	}
 	for k := range m {
 		if !contains(known, k) {
-			return nil, &Error{File: l.t.r.file, Line: l.t.r.lines.line(l.path + "." + k),
-				Msg: unknownKeyMsg(k, l.t.label+" "+l.key, known)}
+			l.t.r.noteUnknown(l.path+"."+k, &Error{File: l.t.r.file, Line: l.t.r.lines.line(l.path + "." + k),
+				Msg: unknownKeyMsg(k, l.t.label+" "+l.key, known)})
 		}
 	}
 	for _, k := range known {
@@ -240,7 +240,7 @@ func (l loc) step(v any, first bool, cur geom.Vec) (geom.Segment, geom.Vec, erro
 			if first {
 				msg = fmt.Sprintf("a path starts with { at = [x, y] }; %s", msg)
 			}
-			return geom.Segment{}, geom.Vec{}, &Error{File: l.t.r.file, Line: l.t.r.lines.line(l.path), Msg: msg}
+			l.t.r.noteUnknown(l.path+"."+k, &Error{File: l.t.r.file, Line: l.t.r.lines.line(l.path), Msg: msg})
 		}
 	}
 	for _, k := range known {

@@ -15,6 +15,34 @@ type reader struct {
 	file  string
 	lines lineIndex
 	scale float64 // mm per drawing unit
+	// unknown collects every unknown key met, so that one reading reports all the typos of a
+	// file; reading goes on past them (see finish). noted keeps each from being told twice.
+	unknown Errors
+	noted   map[string]bool
+}
+
+// noteUnknown records an unknown key at path once.
+func (r *reader) noteUnknown(path string, e *Error) {
+	if r.noted == nil {
+		r.noted = map[string]bool{}
+	}
+	if !r.noted[path] {
+		r.noted[path] = true
+		r.unknown = append(r.unknown, e)
+	}
+}
+
+// finish returns what a reading ends with: every unknown key when there were any, since they
+// explain whatever else went wrong (a misspelt key is also a missing one), else err.
+func (r *reader) finish(err error) error {
+	if len(r.unknown) == 0 {
+		return err
+	}
+	slices.SortStableFunc(r.unknown, func(a, b *Error) int { return a.Line - b.Line })
+	if len(r.unknown) == 1 {
+		return r.unknown[0]
+	}
+	return r.unknown
 }
 
 // table is one TOML table of the part file, with how to name it in messages.
@@ -54,7 +82,8 @@ func (t table) errf(format string, args ...any) error {
 	return &Error{File: t.r.file, Line: t.r.lines.line(t.path), Table: t.label, Msg: fmt.Sprintf(format, args...)}
 }
 
-// checkKeys reports the first unknown key in the file, with a suggestion.
+// checkKeys records every unknown key of the table, with a suggestion, for finish to report;
+// it returns nil so that reading goes on.
 func (t table) checkKeys(known ...string) error {
 	var bad []string
 	for k := range t.m {
@@ -72,8 +101,11 @@ func (t table) checkKeys(known ...string) error {
 	if where == "" {
 		where = "the top level of the file"
 	}
-	l := t.at(bad[0])
-	return &Error{File: t.r.file, Line: t.r.lines.line(l.path), Msg: unknownKeyMsg(bad[0], where, known)}
+	for _, k := range bad {
+		l := t.at(k)
+		t.r.noteUnknown(l.path, &Error{File: t.r.file, Line: t.r.lines.line(l.path), Msg: unknownKeyMsg(k, where, known)})
+	}
+	return nil
 }
 
 // has reports whether the table sets key.
