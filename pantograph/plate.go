@@ -4,7 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"math"
-	"slices"
 	"sort"
 
 	"panto/geom"
@@ -16,10 +15,12 @@ import (
 //
 // The plate is a flat base. In the wall style the template's profile stands on it as a raised
 // island, whose edge the stylus follows from outside, and the openings and recesses are sunk
-// into the island down to the base, so the stylus follows their edges from inside. In the
-// groove style the base is thicker and the stylus runs in channels cut along the path its
-// centre takes. Seats for drilled holes are conical pits for a pointed stylus or bores for a
-// round one. A strip along the front carries the title, a check bar and a test square.
+// into the island, so the stylus follows their edges from inside; one that lies inside another
+// is sunk below the other's floor (the rule of nested areas, plate_levels.go). In the groove
+// style the base is thicker and the stylus runs in channels cut along the path its centre
+// takes (plate_channels.go). Seats for drilled holes are conical pits for a pointed stylus or
+// bores for a round one (plate_seats.go). A strip along the front carries the title, a check
+// bar and a test square.
 
 // SeatKind is the shape of a seat for a drilled hole.
 type SeatKind string
@@ -199,9 +200,7 @@ func BuildPlate(p Plan, m *Machine, o PlateOptions) (Plate, error) {
 		return Plate{}, err
 	}
 	d.template()
-	if err := d.seats(); err != nil {
-		return Plate{}, err
-	}
+	d.seats()
 	if err := d.strip(); err != nil {
 		return Plate{}, err
 	}
@@ -225,6 +224,8 @@ type plateDesign struct {
 	surface           float64 // height of the surface the template is traced on
 	islandTop         float64
 	islands, openings []geom.Region
+	openingLabel      []string      // the feature each opening belongs to
+	depth             []int         // wall style: how many other openings hold each opening
 	cuts              []geom.Region // channels and grooves as sunk
 	taken             []takenArea   // everything placed, for finding room for labels
 }
@@ -312,7 +313,8 @@ func (d *plateDesign) layout() error {
 // add puts an area on the plate.
 func (d *plateDesign) add(a PlateArea) { d.pl.Areas = append(d.pl.Areas, a) }
 
-// template puts the traced features and grooves on the plate.
+// template puts the traced features and grooves on the plate: the profile and openings in the
+// wall style, the channels of the groove style, and the channels along grooves in both.
 func (d *plateDesign) template() {
 	for _, f := range d.plan.Features {
 		for _, r := range f.TemplateRegions {
@@ -320,27 +322,28 @@ func (d *plateDesign) template() {
 				d.islands = append(d.islands, r)
 			} else {
 				d.openings = append(d.openings, d.grow(r))
+				d.openingLabel = append(d.openingLabel, f.Label)
 			}
 		}
 	}
-	var cuts []geom.Region
+	chs := d.channels()
+	d.nest()
+	pieces := d.channelPieces(chs)
+	d.raise(pieces)
 	if d.o.Style == StyleWall {
+		k := 0
 		for _, f := range d.plan.Features {
 			for _, r := range f.TemplateRegions {
 				if f.Kind == KindProfile {
 					d.add(PlateArea{What: "profile", Feature: f.Number, Region: r, Top: d.islandTop})
 				} else {
-					d.add(PlateArea{What: "opening", Feature: f.Number, Region: d.grow(r), Top: d.pl.Base})
+					d.add(PlateArea{What: "opening", Feature: f.Number, Region: d.openings[k], Top: d.floor(k)})
+					k++
 				}
 			}
 		}
-	} else {
-		cuts = d.channelBands()
 	}
-	for _, f := range d.plan.Features {
-		cuts = append(cuts, grooveCaps(f)...)
-	}
-	d.cutChannels(cuts)
+	d.sinkChannels(chs, pieces)
 	for _, r := range d.openings {
 		d.takeRegion(r)
 	}
@@ -357,152 +360,6 @@ func (d *plateDesign) grow(r geom.Region) geom.Region {
 		return r
 	}
 	return out[0]
-}
-
-// channelBands returns, for the groove style, a band of stylus width plus clearance along the
-// path of the stylus's centre round every traced feature.
-func (d *plateDesign) channelBands() []geom.Region {
-	var out []geom.Region
-	for _, f := range d.plan.Features {
-		rs := f.Stylus / 2
-		if f.Tip == TipPointed {
-			rs = 0
-		}
-		half := (f.Stylus + grooveClearance) / 2
-		for _, r := range f.TemplateRegions {
-			centre := []geom.Region{r}
-			if rs > 0 {
-				dir := 1.0
-				if f.Kind != KindProfile {
-					dir = -1
-				}
-				centre = r.Offset(dir * rs).Regions
-			}
-			outer := geom.OffsetRegions(centre, half)
-			inner := geom.OffsetRegions(centre, -half)
-			out = append(out, geom.Difference(outer, inner)...)
-		}
-	}
-	return out
-}
-
-// grooveCaps returns the channel along an engraved groove's path: the groove's width plus
-// clearance, round-ended.
-func grooveCaps(f PlannedFeature) []geom.Region {
-	half := (f.Width + grooveClearance) / 2
-	var caps []geom.Region
-	for k := 1; k < len(f.Path); k++ {
-		caps = append(caps, geom.NewRegion(geom.Capsule(f.Path[k-1], f.Path[k], half)))
-	}
-	return caps
-}
-
-// cutChannels sinks the channels, joined where they meet: kept a little off every seat and,
-// in the wall style, off the openings and within the island, so that no two areas of the
-// plate cross.
-func (d *plateDesign) cutChannels(cuts []geom.Region) {
-	if len(cuts) == 0 {
-		return
-	}
-	ch := geom.Union(cuts...)
-	var keep []geom.Region
-	if d.o.Style == StyleWall {
-		keep = geom.OffsetRegions(d.openings, labelGap)
-		ch = geom.Intersection(ch, geom.OffsetRegions(d.islands, -labelGap))
-	}
-	for _, f := range d.plan.Features {
-		for _, s := range f.Seats {
-			keep = append(keep, geom.NewRegion(geom.Circle(s, d.seatRadius()+datumRing+labelGap)))
-		}
-	}
-	if len(keep) > 0 {
-		ch = geom.Difference(ch, keep)
-	}
-	for _, r := range ch {
-		d.add(PlateArea{What: "channel", Region: r, Top: d.surfaceAt(r.Outer[0].A) - d.pl.WallHeight})
-		d.takeRegion(r)
-		d.cuts = append(d.cuts, r)
-	}
-}
-
-// surfaceAt returns the height of the traced surface at p: the island's top on the profile,
-// the base elsewhere.
-func (d *plateDesign) surfaceAt(p geom.Vec) float64 {
-	if d.o.Style == StyleWall {
-		for _, o := range d.openings {
-			if o.Contains(p) {
-				return d.pl.Base
-			}
-		}
-		for _, r := range d.islands {
-			if r.Contains(p) {
-				return d.islandTop
-			}
-		}
-	}
-	return d.pl.Base
-}
-
-// seats sinks a seat at every drilled hole, and marks the datum.
-func (d *plateDesign) seats() error {
-	datumDone := false
-	for _, f := range d.plan.Features {
-		for _, s := range f.Seats {
-			datum := s.Near(geom.Vec{}) || s.Dist(geom.Vec{}) < 1e-6
-			d.seat(s, f.Number, f.Drill*d.plan.Setup.Ratio, datum)
-			datumDone = datumDone || datum
-		}
-	}
-	if datumDone {
-		return nil
-	}
-	r := math.Max(coneRimMax, d.stylus+boreClearance+d.growth)/2 + datumRing + labelGap
-	if edge := d.edgeDistance(geom.Vec{}); edge < r {
-		d.pl.Notes = append(d.pl.Notes, fmt.Sprintf("the datum lies %.1f mm from a traced edge, too near for a seat: the plate has no datum seat; zero the dials on the datum as the part file places it", edge))
-		return nil
-	}
-	d.seat(geom.Vec{}, 0, coneRimMax, true)
-	return nil
-}
-
-// edgeDistance returns the distance from p to the nearest traced edge.
-func (d *plateDesign) edgeDistance(p geom.Vec) float64 {
-	best := math.Inf(1)
-	for _, r := range slices.Concat(d.islands, d.openings, d.cuts) {
-		for _, c := range r.Contours() {
-			for _, s := range c {
-				best = math.Min(best, s.DistanceTo(p))
-			}
-		}
-	}
-	return best
-}
-
-// seat sinks one seat at s; footprint is the hole's size on the template, which a cone's rim
-// keeps within.
-func (d *plateDesign) seat(s geom.Vec, number int, footprint float64, datum bool) {
-	top := d.surfaceAt(s)
-	ps := PlateSeat{At: s, Kind: d.o.Seat, Feature: number, Datum: datum}
-	if ps.Kind == SeatCone {
-		ps.Diameter = math.Max(coneRimMin, math.Min(coneRimMax, footprint))
-		ps.Depth = ps.Diameter / 2
-		d.add(PlateArea{What: "seat", Feature: number, Region: geom.NewRegion(geom.Circle(s, ps.Diameter/2)),
-			Top: top - ps.Depth, Cone: true})
-	} else {
-		ps.Diameter = d.stylus + boreClearance + d.growth
-		ps.Depth = math.Min(d.pl.WallHeight, top-1)
-		d.add(PlateArea{What: "seat", Feature: number, Region: geom.NewRegion(geom.Circle(s, ps.Diameter/2)),
-			Top: top - ps.Depth})
-	}
-	d.pl.Seats = append(d.pl.Seats, ps)
-	d.takeBox(geom.Box{Min: s, Max: s}.Expand(ps.Diameter/2 + labelGap))
-	if datum {
-		// A sunk ring round the datum seat marks it at a glance.
-		in, out := ps.Diameter/2+datumRing-1.5, ps.Diameter/2+datumRing
-		ring := geom.NewRegion(geom.Circle(s, out), geom.Circle(s, in))
-		d.add(PlateArea{What: "datum mark", Region: ring, Top: top - labelDepth})
-		d.takeBox(geom.Box{Min: s, Max: s}.Expand(out + labelGap))
-	}
 }
 
 // seatRadius returns the radius of the largest seat with its datum ring.

@@ -125,7 +125,12 @@ func TestBuildPlateRandom(t *testing.T) {
 			if err != nil {
 				t.Fatalf("seed %d: %v", seed, err)
 			}
-			checkPlateMesh(t, pl)
+			mesh := checkPlateMesh(t, pl)
+			growth := 0.0
+			if m != nil {
+				growth = m.Printer.HoleGrowth
+			}
+			checkPlateEdges(t, p, pl, mesh, growth)
 			if t.Failed() {
 				t.Logf("seed %d, options %+v", seed, o)
 			}
