@@ -25,7 +25,7 @@ func partScales() []float64 { return []float64{50, 25, 20, 10, 8, 5, 4, 3, 2, 1,
 const (
 	partTop     = 24  // title block at the top of the page
 	dimRoom     = 16  // room for a dimension line left of and below the part
-	tableLine   = 5.2 // one line of the feature table
+	tableLine   = 4.6 // one line of the feature table
 	partShare   = 0.6 // of the page height below the title kept for the picture
 	arrowLength = 2.2
 	partLabel   = 9.0 // size of the feature numbers, points
@@ -91,7 +91,8 @@ func newPartLayout(part pantograph.Part, p pantograph.Plan, paper Paper, fonts *
 		}
 	}
 	sz := b.Size().Mul(l.scale)
-	at := room.Min.Add(room.Size().Sub(sz).Mul(0.5)) // centred in its room
+	// centred across its room and at the top of it, so the table below starts high
+	at := geom.V(room.Min.X+(room.Size().X-sz.X)/2, room.Max.Y-sz.Y)
 	l.t = geom.Translate(b.Min.Neg()).Then(geom.Scale(l.scale)).Then(geom.Translate(at))
 	return l
 }
@@ -147,6 +148,9 @@ func (l partLayout) pages() []*sketch {
 		rows = rows[n:]
 		if len(rows) == 0 {
 			break
+		}
+		if !rows[0].first { // a feature carried over names itself again
+			rows[0].first, rows[0].name = true, rows[0].name+", continued"
 		}
 		k = newSketch(l.fonts)
 		top = l.size.Y - partTop

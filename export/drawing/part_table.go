@@ -34,7 +34,7 @@ const maxOutlineRows = 40
 // part frame in mm (the writer converts to the part's units).
 type tableRow struct {
 	number int
-	name   string // the feature's name and kind, on its first row only
+	name   string // the feature's name and kind, written on its first row only
 	what   string // "hole", "corner", "centre", ...
 	at     geom.Vec
 	size   string  // "Ø", "R" or "width", written before sizeMM; words alone when sizeMM is 0
@@ -63,13 +63,13 @@ func featureRows(part pantograph.Part, numbers []int) []tableRow {
 		f := all[i]
 		rows := rowsOf(f)
 		for k := range rows {
-			rows[k].number, rows[k].depth = numbers[i], f.Depth
+			rows[k].number, rows[k].depth, rows[k].name = numbers[i], f.Depth, featureWords(f)
 			if f.Kind == pantograph.KindProfile || f.Kind == pantograph.KindCutout {
 				rows[k].depth = pantograph.Depth{Through: true}
 			}
 		}
 		if len(rows) > 0 {
-			rows[0].first, rows[0].name = true, featureWords(f)
+			rows[0].first = true
 		}
 		out = append(out, rows...)
 	}

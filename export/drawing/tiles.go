@@ -167,9 +167,10 @@ func drawMark(k *sketch, c geom.Vec) {
 // margin, where they touch nothing drawn) and labels it.
 func (t tiling) frame(pen Pen, title string, row, col, page int) {
 	W, H := t.paper.W, t.paper.H
+	o := float64(Margin) // the blanks reach past the paper's edge, where a renderer may still show a pixel
 	for _, b := range []geom.Box{
-		{Min: geom.V(0, 0), Max: geom.V(W, Margin)}, {Min: geom.V(0, H-Margin), Max: geom.V(W, H)},
-		{Min: geom.V(0, 0), Max: geom.V(Margin, H)}, {Min: geom.V(W-Margin, 0), Max: geom.V(W, H)},
+		{Min: geom.V(-o, -o), Max: geom.V(W+o, Margin)}, {Min: geom.V(-o, H-Margin), Max: geom.V(W+o, H+o)},
+		{Min: geom.V(-o, -o), Max: geom.V(Margin, H+o)}, {Min: geom.V(W-Margin, -o), Max: geom.V(W+o, H+o)},
 	} {
 		pen.Blank(b)
 	}
