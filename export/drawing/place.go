@@ -14,7 +14,8 @@ import (
 // would touch a line, arrowhead or text already drawn or leave the drawing's room, and the
 // rest are scored by how near they are to their own feature and how far from every other.
 // The labels with fewest places to go are placed first; one that finds every place taken by
-// labels already placed may move one of them to another of its places.
+// labels already placed may move one of them to another of its places. A label with no place
+// within labelReach is looked for again out to wideReach, on a drawing too crowded for it.
 
 // Placement rules, mm on paper (common practice, no source): the clearance keeps a number
 // legible beside a line; the reach is the farthest a number may stand from its feature and
@@ -22,6 +23,7 @@ import (
 const (
 	labelClear   = 0.6
 	labelReach   = 7.0
+	wideReach    = 3 * labelReach
 	ringStep     = 0.9
 	directions   = 16
 	anchorStep   = 2.5 // along an outline, between points a number is tried beside
@@ -65,7 +67,7 @@ type placer struct {
 }
 
 // placeLabels places every job on k inside area and draws them; it returns each label's box,
-// empty for one that found no place (a leader line then ties it to its feature).
+// empty for one that found no place even out to wideReach.
 func placeLabels(k *sketch, area geom.Box, jobs []labelJob) []geom.Box {
 	p := placer{k: k, area: area, jobs: jobs, placed: make([]geom.Box, len(jobs))}
 	for i := range p.placed {
@@ -79,13 +81,18 @@ func placeLabels(k *sketch, area geom.Box, jobs []labelJob) []geom.Box {
 		}
 	}
 	for i, j := range jobs {
-		cands[i] = p.candidates(i, j)
+		cands[i] = p.candidates(i, j, labelReach)
 		order[i] = i
 	}
 	sort.SliceStable(order, func(a, b int) bool { return len(cands[order[a]]) < len(cands[order[b]]) })
 	for _, i := range order {
 		if !p.take(i, cands[i]) {
 			p.moveAside(i, cands)
+		}
+	}
+	for i, j := range jobs {
+		if p.placed[i].IsEmpty() {
+			p.take(i, p.candidates(i, j, wideReach))
 		}
 	}
 	for i, j := range jobs {
@@ -150,23 +157,23 @@ func (p *placer) clearOfPlaced(b geom.Box, skip int) bool {
 	return true
 }
 
-// candidates returns job i's places clear of everything drawn, best first.
-func (p *placer) candidates(i int, j labelJob) []candidate {
+// candidates returns job i's places clear of everything drawn within reach, best first.
+func (p *placer) candidates(i int, j labelJob, reach float64) []candidate {
 	ink := p.k.fonts.ink(j.text, j.size, j.bold, canvas.Left)
 	size := ink.Size()
 	var out []candidate
 	for _, a := range j.anchors {
-		for ring := 0.0; ring*ringStep <= labelReach; ring++ {
+		for ring := 0.0; ring*ringStep <= reach; ring++ {
 			for n := 0; n < directions; n++ {
 				d := geom.V(1, 0).Rotate(2 * math.Pi * float64(n) / directions)
-				reach := a.r + labelClear + ring*ringStep + math.Abs(d.X)*size.X/2 + math.Abs(d.Y)*size.Y/2
-				c := a.at.Add(d.Mul(reach))
+				far := a.r + labelClear + ring*ringStep + math.Abs(d.X)*size.X/2 + math.Abs(d.Y)*size.Y/2
+				c := a.at.Add(d.Mul(far))
 				box := geom.Box{Min: c.Sub(size.Mul(0.5)), Max: c.Add(size.Mul(0.5))}
 				if !p.free(box) {
 					continue
 				}
-				own := chainsBoxDist(j.chains, box, labelReach)
-				if own > labelReach {
+				own := chainsBoxDist(j.chains, box, reach)
+				if own > reach {
 					continue
 				}
 				rival := p.rivalDist(i, box, own+rivalSlack)
