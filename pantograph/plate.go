@@ -162,9 +162,10 @@ type PlateSeat struct {
 
 // PlateLabel is lettering sunk into the plate.
 type PlateLabel struct {
-	Text   string
-	At     geom.Vec // lower left corner, plate frame
-	Height float64
+	Text    string
+	At      geom.Vec // lower left corner, plate frame
+	Height  float64
+	Feature int // the number of the feature it names, 0 for the title and the check bar's
 }
 
 // ErrPlate is wrapped by BuildPlate and Plate.Terrace when the plate cannot be made.

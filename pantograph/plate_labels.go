@@ -3,6 +3,7 @@ package pantograph
 import (
 	"fmt"
 	"math"
+	"sort"
 
 	"panto/geom"
 )
@@ -74,111 +75,229 @@ func textBox(text string, at geom.Vec, h float64) geom.Box {
 	return geom.Box{Min: at, Max: at.Add(geom.V(TextWidth(text, h), h*(1+strokeUnits/glyphHeight)))}
 }
 
-// maxLabelTries is how many of a feature's seats are tried as places for its number: enough to
-// get round a crowded first seat, few enough to stay quick on plates with thousands of holes.
-const maxLabelTries = 8
+// The numbers are placed by a search: each has candidate places all round its feature (beside
+// each of its first seats, along its outline or groove), at full and then small height; a
+// candidate is refused when free says no, and the rest are scored by how near they are to
+// their own feature and how far from every other, small letters costing a little. The
+// numbers with fewest places go first. Rules of the search (common practice, no source):
+const (
+	// maxLabelTries is how many of a feature's seats are tried as places for its number:
+	// enough to get round a crowded first seat, few enough to stay quick on plates with
+	// thousands of holes.
+	maxLabelTries = 8
+	// numberReach is how far beyond the clearance a rule demands a number may stand from its
+	// feature and still be read as its own; numberRing how finely distances out to it are
+	// tried, numberTurns how many directions, numberStep how far apart places along an
+	// outline are, and maxNumberAnchors the most places along one outline.
+	numberReach      = 8.0
+	numberRing       = 1.0
+	numberTurns      = 16
+	numberStep       = 4.0
+	maxNumberAnchors = 80
+	// rivalSlack: a number within this much as near to another feature as to its own costs
+	// rivalCost a mm; smallCost is what setting a number small costs, in mm of distance.
+	rivalSlack = 2.0
+	rivalCost  = 3.0
+	smallCost  = 2.0
+	// numberChord is the chord tolerance edges are flattened to for the search's measures;
+	// every clearance it checks is a millimetre or more.
+	numberChord = 0.02
+)
+
+// numberJob is one feature's number to place: its text, the feature's edges (flattened) and
+// the places round it to try.
+type numberJob struct {
+	f       PlannedFeature
+	text    string
+	edges   []edgePiece
+	anchors []numberAnchor
+}
+
+// numberAnchor is a point a number may stand beside, or a circle of radius r about it.
+type numberAnchor struct {
+	at geom.Vec
+	r  float64
+}
+
+// numberPlace is a candidate place: lower left corner, height, box and score.
+type numberPlace struct {
+	at    geom.Vec
+	h     float64
+	box   geom.Box
+	score float64
+}
 
 // numbers puts each feature's number beside it, where there is room: on the island, clear of
 // everything else, or on the base clear of the stylus's path round the island.
 func (d *plateDesign) numbers() error {
-	for _, f := range d.plan.Features {
-		if f.Number == 0 || f.TemplateBounds.IsEmpty() {
-			continue
-		}
-		text := fmt.Sprint(f.Number)
-		var nears []geom.Box
-		for k, s := range f.Seats {
-			if k == maxLabelTries {
-				break
-			}
-			nears = append(nears, geom.Box{Min: s, Max: s}.Expand(d.seatRadius()+2*labelGap))
-		}
-		switch {
-		case f.Kind == KindProfile:
-			b := f.TemplateBounds
-			nears = append(nears, geom.Box{Min: b.Min, Max: b.Min}.Expand(f.Stylus+labelGap))
-		case len(nears) == 0:
-			nears = append(nears, f.TemplateBounds)
-		}
-		var at geom.Vec
-		var h float64
+	n := numberer{d: d}
+	for _, r := range d.islands {
+		n.islands = append(n.islands, takenArea{box: r.Bounds(), region: &r, edges: flatEdges(r)})
+	}
+	jobs := d.numberJobs()
+	places := make([][]numberPlace, len(jobs))
+	order := make([]int, len(jobs))
+	for i := range jobs {
+		places[i] = n.places(jobs, i)
+		order[i] = i
+	}
+	sort.SliceStable(order, func(a, b int) bool { return len(places[order[a]]) < len(places[order[b]]) })
+	for _, i := range order {
 		ok := false
-		for _, near := range nears {
-			if at, h, ok = d.roomNear(text, near); ok {
+		for _, c := range places[i] {
+			if n.free(c.box) { // again: numbers placed since may have taken it
+				if err := d.label(jobs[i].text, c.at, c.h); err != nil {
+					return err
+				}
+				d.pl.Labels[len(d.pl.Labels)-1].Feature = jobs[i].f.Number
+				ok = true
 				break
 			}
 		}
 		if !ok {
-			d.pl.Notes = append(d.pl.Notes, fmt.Sprintf("no room for the number of %s", f.Label))
-			continue
-		}
-		if err := d.label(text, at, h); err != nil {
-			return err
+			d.pl.Notes = append(d.pl.Notes, fmt.Sprintf("no room for the number of %s", jobs[i].f.Label))
 		}
 	}
 	return nil
 }
 
-// roomNear finds a place for text beside box b: right, left, above, below, at full and then
-// small height.
-func (d *plateDesign) roomNear(text string, b geom.Box) (geom.Vec, float64, bool) {
+// numberJobs lists the numbers to place, with each feature's edges and places to try.
+func (d *plateDesign) numberJobs() []numberJob {
+	var jobs []numberJob
+	for _, f := range d.plan.Features {
+		if f.Number == 0 || f.TemplateBounds.IsEmpty() {
+			continue
+		}
+		j := numberJob{f: f, text: fmt.Sprint(f.Number)}
+		var edges [][]geom.Vec
+		for _, r := range f.TemplateRegions {
+			edges = append(edges, flatEdges(r)...)
+		}
+		j.anchors = alongEdges(edges, 0)
+		for k, s := range f.Seats {
+			edges = append(edges, flatEdges(geom.NewRegion(geom.Circle(s, d.seatRadius())))...)
+			if k < maxLabelTries {
+				j.anchors = append(j.anchors, numberAnchor{at: s, r: d.seatRadius()})
+			}
+		}
+		if len(f.Path) > 1 {
+			edges = append(edges, f.Path)
+			j.anchors = append(j.anchors, alongEdges([][]geom.Vec{f.Path}, f.Width/2)...)
+		}
+		j.edges = edgePieces(edges)
+		jobs = append(jobs, j)
+	}
+	return jobs
+}
+
+// numberer searches for room for the numbers, with the islands' edges flattened once.
+type numberer struct {
+	d       *plateDesign
+	islands []takenArea
+}
+
+// places returns job i's free places, best first.
+func (n numberer) places(jobs []numberJob, i int) []numberPlace {
+	d, j := n.d, jobs[i]
+	reach := numberReach + d.stylus // off the island a number keeps a stylus diameter away
+	var out []numberPlace
 	for _, h := range []float64{labelHeight, smallLabel} {
-		w, th := TextWidth(text, h), h*(1+strokeUnits/glyphHeight)
-		g := labelGap + 0.5
-		c := b.Center()
-		for _, at := range []geom.Vec{
-			geom.V(b.Max.X+g, c.Y-th/2), geom.V(b.Min.X-g-w, c.Y-th/2),
-			geom.V(c.X-w/2, b.Max.Y+g), geom.V(c.X-w/2, b.Min.Y-g-th),
-			geom.V(b.Max.X+g, b.Max.Y+g), geom.V(b.Min.X-g-w, b.Min.Y-g-th),
-		} {
-			if d.free(textBox(text, at, h)) {
-				return at, h, true
+		size := textBox(j.text, geom.Vec{}, h).Size()
+		for _, a := range j.anchors {
+			for ring := 0.0; ring*numberRing <= reach; ring++ {
+				for turn := 0; turn < numberTurns; turn++ {
+					dir := geom.V(1, 0).Rotate(2 * math.Pi * float64(turn) / numberTurns)
+					far := a.r + 2*labelGap + ring*numberRing + math.Abs(dir.X)*size.X/2 + math.Abs(dir.Y)*size.Y/2
+					at := a.at.Add(dir.Mul(far)).Sub(size.Mul(0.5))
+					box := geom.Box{Min: at, Max: at.Add(size)}
+					if !n.free(box) {
+						continue
+					}
+					own := edgesBoxDist(j.edges, box, reach)
+					if own > reach {
+						continue
+					}
+					rival := math.Inf(1)
+					for k := range jobs {
+						if k != i {
+							rival = min(rival, edgesBoxDist(jobs[k].edges, box, own+rivalSlack))
+						}
+					}
+					score := own + rivalCost*math.Max(0, own+rivalSlack-rival) + 0.1*(2-dir.X-dir.Y)
+					if h != labelHeight {
+						score += smallCost
+					}
+					out = append(out, numberPlace{at: at, h: h, box: box, score: score})
+				}
 			}
 		}
 	}
-	return geom.Vec{}, 0, false
+	sort.SliceStable(out, func(a, b int) bool { return out[a].score < out[b].score })
+	return out
+}
+
+// alongEdges returns places of radius r every numberStep along the chains, spaced wider on
+// long outlines so there are at most maxNumberAnchors.
+func alongEdges(chains [][]geom.Vec, r float64) []numberAnchor {
+	total := 0.0
+	for _, c := range chains {
+		for k := 1; k < len(c); k++ {
+			total += c[k].Dist(c[k-1])
+		}
+	}
+	step := math.Max(numberStep, total/maxNumberAnchors)
+	var out []numberAnchor
+	for _, c := range chains {
+		left := 0.0
+		for k := 1; k < len(c); k++ {
+			l := c[k].Dist(c[k-1])
+			for ; l > 0 && left <= l; left += step {
+				out = append(out, numberAnchor{at: c[k-1].Lerp(c[k], left/l), r: r})
+			}
+			left -= l
+		}
+	}
+	return out
 }
 
 // free reports whether box b can take a label: on the plate above the front strip, clear of
 // everything placed, and in the wall style wholly on the island or clear of it by a stylus
 // diameter, so the stylus running round the island never meets a letter.
-func (d *plateDesign) free(b geom.Box) bool {
+func (n numberer) free(b geom.Box) bool {
+	d := n.d
 	g := b.Expand(labelGap)
 	inner := d.box.Expand(-d.fix.inset)
 	if !inner.ContainsPoint(g.Min) || !inner.ContainsPoint(g.Max) || g.Min.Y < d.box.Min.Y+stripHeight+d.fix.extra() {
 		return false
 	}
 	for _, t := range d.taken {
-		if t.box.Overlaps(g) && (t.region == nil || meets(g, *t.region)) {
+		if t.box.Overlaps(g) && (t.region == nil || boxMeets(g, *t.region, t.edges)) {
 			return false
 		}
 	}
 	if d.o.Style != StyleWall {
 		return true
 	}
-	rect := boxRegion(g)
-	for _, r := range d.islands {
-		if !r.Bounds().Overlaps(g) {
-			continue
-		}
-		in := geom.Intersection([]geom.Region{rect}, []geom.Region{r})
-		if area(in) > rect.Area()*(1-1e-9) {
+	for _, r := range n.islands {
+		if r.box.Overlaps(g) && !boxCrossed(g, r.edges) && r.region.Contains(g.Center()) {
 			return true // wholly on the island
 		}
 	}
 	wide := g.Expand(d.stylus)
-	for _, r := range d.islands {
-		if r.Bounds().Overlaps(wide) && meets(wide, r) {
+	for _, r := range n.islands {
+		if r.box.Overlaps(wide) && boxMeets(wide, *r.region, r.edges) {
 			return false
 		}
 	}
 	return true
 }
 
-// takenArea is something on the plate that labels keep clear of: a box, or a region within it.
+// takenArea is something on the plate that labels keep clear of: a box, or a region within it
+// with its edges flattened for the search.
 type takenArea struct {
 	box    geom.Box
 	region *geom.Region
+	edges  [][]geom.Vec
 }
 
 // takeBox marks a box as taken.
@@ -186,25 +305,133 @@ func (d *plateDesign) takeBox(b geom.Box) { d.taken = append(d.taken, takenArea{
 
 // takeRegion marks a region as taken.
 func (d *plateDesign) takeRegion(r geom.Region) {
-	d.taken = append(d.taken, takenArea{box: r.Bounds(), region: &r})
+	d.taken = append(d.taken, takenArea{box: r.Bounds(), region: &r, edges: flatEdges(r)})
 }
 
-// meets reports whether box b and region r share any area.
-func meets(b geom.Box, r geom.Region) bool {
-	return area(geom.Intersection([]geom.Region{boxRegion(b)}, []geom.Region{r})) > 0
-}
-
-// boxRegion returns box b as a region.
-func boxRegion(b geom.Box) geom.Region {
-	c, _ := geom.Rect(b.Min, b.Size(), 0)
-	return geom.NewRegion(c)
-}
-
-// area returns the total area of rs.
-func area(rs []geom.Region) float64 {
-	a := 0.0
-	for _, r := range rs {
-		a += r.Area()
+// flatEdges returns the contours of r as closed chains of points within numberChord of them.
+func flatEdges(r geom.Region) [][]geom.Vec {
+	var out [][]geom.Vec
+	for _, c := range r.Contours() {
+		if pts := c.Flatten(numberChord); len(pts) > 0 {
+			out = append(out, append(pts, pts[0]))
+		}
 	}
-	return a
+	return out
+}
+
+// boxMeets reports whether box b and region r, whose edges are given, share any area: an
+// edge enters the box, or one holds the other.
+func boxMeets(b geom.Box, r geom.Region, edges [][]geom.Vec) bool {
+	if boxCrossed(b, edges) || r.Contains(b.Center()) {
+		return true
+	}
+	return len(edges) > 0 && len(edges[0]) > 0 && b.ContainsPoint(edges[0][0])
+}
+
+// boxCrossed reports whether any of the chains enters box b.
+func boxCrossed(b geom.Box, chains [][]geom.Vec) bool {
+	for _, c := range chains {
+		for k := 1; k < len(c); k++ {
+			if segmentMeetsBox(c[k-1], c[k], b) {
+				return true
+			}
+		}
+	}
+	return false
+}
+
+// edgePiece is a run of at most pieceLength points of an edge, with its box, so a measure
+// passes over the pieces far from the box it measures (a speed choice).
+type edgePiece struct {
+	pts []geom.Vec
+	box geom.Box
+}
+
+const pieceLength = 16
+
+// edgePieces cuts chains into pieces.
+func edgePieces(chains [][]geom.Vec) []edgePiece {
+	var out []edgePiece
+	for _, c := range chains {
+		for k := 0; k == 0 || k < len(c)-1; k += pieceLength - 1 {
+			pts := c[k:min(len(c), k+pieceLength)]
+			b := geom.EmptyBox()
+			for _, p := range pts {
+				b = b.AddPoint(p)
+			}
+			out = append(out, edgePiece{pts: pts, box: b})
+		}
+	}
+	return out
+}
+
+// edgesBoxDist returns the least distance from box b to the pieces, 0 when one enters it;
+// a distance beyond limit may come out as any value beyond it.
+func edgesBoxDist(pieces []edgePiece, b geom.Box, limit float64) float64 {
+	best := math.Inf(1)
+	for _, e := range pieces {
+		if boxesGap(e.box, b) > min(best, limit) {
+			continue
+		}
+		for k := 1; k < len(e.pts); k++ {
+			p, q := e.pts[k-1], e.pts[k]
+			if segmentMeetsBox(p, q, b) {
+				return 0
+			}
+			best = min(best, boxGap(p, b), boxGap(q, b))
+			for _, v := range []geom.Vec{b.Min, b.Max, geom.V(b.Min.X, b.Max.Y), geom.V(b.Max.X, b.Min.Y)} {
+				best = min(best, pointSegment(v, p, q))
+			}
+		}
+	}
+	return best
+}
+
+// pointSegment returns the distance from v to the segment p–q.
+func pointSegment(v, p, q geom.Vec) float64 {
+	d := q.Sub(p)
+	t := 0.0
+	if l2 := d.Dot(d); l2 > 0 {
+		t = max(0, min(1, v.Sub(p).Dot(d)/l2))
+	}
+	w := p.Add(d.Mul(t)).Sub(v)
+	return math.Sqrt(w.X*w.X + w.Y*w.Y)
+}
+
+// boxesGap returns the gap between boxes a and b, 0 when they overlap.
+func boxesGap(a, b geom.Box) float64 {
+	dx, dy := max(0, a.Min.X-b.Max.X, b.Min.X-a.Max.X), max(0, a.Min.Y-b.Max.Y, b.Min.Y-a.Max.Y)
+	return math.Sqrt(dx*dx + dy*dy)
+}
+
+// segmentMeetsBox reports whether segment p–q has a point in box b (Liang–Barsky clipping).
+func segmentMeetsBox(p, q geom.Vec, b geom.Box) bool {
+	if max(p.X, q.X) < b.Min.X || min(p.X, q.X) > b.Max.X || max(p.Y, q.Y) < b.Min.Y || min(p.Y, q.Y) > b.Max.Y {
+		return false
+	}
+	t0, t1 := 0.0, 1.0
+	dx, dy := q.X-p.X, q.Y-p.Y
+	for _, e := range [4][2]float64{{-dx, p.X - b.Min.X}, {dx, b.Max.X - p.X}, {-dy, p.Y - b.Min.Y}, {dy, b.Max.Y - p.Y}} {
+		if e[0] == 0 {
+			if e[1] < 0 {
+				return false
+			}
+			continue
+		}
+		if r := e[1] / e[0]; e[0] < 0 {
+			t0 = max(t0, r)
+		} else {
+			t1 = min(t1, r)
+		}
+		if t0 > t1 {
+			return false
+		}
+	}
+	return true
+}
+
+// boxGap returns the distance from p to box b, 0 inside it.
+func boxGap(p geom.Vec, b geom.Box) float64 {
+	dx, dy := max(0, b.Min.X-p.X, p.X-b.Max.X), max(0, b.Min.Y-p.Y, p.Y-b.Max.Y)
+	return math.Sqrt(dx*dx + dy*dy)
 }

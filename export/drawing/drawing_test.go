@@ -73,7 +73,8 @@ func TestTemplateSVGSize(t *testing.T) {
 }
 
 // TestTiling checks page counts against hand-worked tilings on A4 (window 186 × 273 mm upright,
-// overlap 15) and that every alignment mark is on at least two pages.
+// overlap 15), that every alignment mark is on at least two pages and every pair of
+// neighbouring pages shares two.
 func TestTiling(t *testing.T) {
 	tests := []struct {
 		name   string
@@ -95,10 +96,19 @@ func TestTiling(t *testing.T) {
 			if x := float64(tl.nx-1)*tl.step.X + tl.window.X; x < tc.size.X {
 				t.Errorf("tiles reach %v of %v mm across", x, tc.size.X)
 			}
-			for _, m := range tl.marks(tc.size) {
+			fonts, err := LoadFonts()
+			if err != nil {
+				t.Fatal(err)
+			}
+			marks := tl.placeMarks(newSketch(fonts), func(geom.Vec) bool { return false })
+			for _, m := range marks {
 				if n := pagesShowing(tl, m); n < 2 {
 					t.Errorf("mark %v is on %d page(s)", m, n)
 				}
+			}
+			// derived: (nx − 1) × ny pairs side by side and nx × (ny − 1) one above the other
+			if got, want := len(marks), 2*((tl.nx-1)*tl.ny+tl.nx*(tl.ny-1)); got != want {
+				t.Errorf("got %d marks, want %d", got, want)
 			}
 		})
 	}
@@ -151,28 +161,24 @@ func TestPaperNamed(t *testing.T) {
 }
 
 func TestPartScale(t *testing.T) {
-	fonts, err := LoadFonts()
-	if err != nil {
-		t.Fatal(err)
-	}
 	tests := []struct {
 		name string
 		w, h float64
 		want float64
 	}{
-		// derived on A4: room 186 − 20 = 166 mm across, (273 − 24) × 0.6 − 16 = 133.4 up
-		{"22 × 14 plate", 22, 14, 5},  // 8 × 22 = 176 > 166; 5 × 22 = 110
-		{"35 × 17 bridge", 35, 17, 4}, // 5 × 35 = 175 > 166; 4 × 35 = 140
+		// derived on A4: room 186 − 16 − 2 × 7 = 156 mm across, (273 − 24) × 0.6 − 16 − 7 =
+		// 126.4 up (the dimension lines' room and the numbers' reach each side)
+		{"22 × 14 plate", 22, 14, 5},  // 8 × 22 = 176 > 156; 5 × 22 = 110
+		{"35 × 17 bridge", 35, 17, 4}, // 5 × 35 = 175 > 156; 4 × 35 = 140
 		{"3 × 2 pin", 3, 2, 50},       // 150 fits
-		{"300 × 100", 300, 100, 0.5},  // 1 × 300 > 166
+		{"300 × 100", 300, 100, 0.5},  // 1 × 300 > 156
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
 			part := pantograph.Part{Name: "x", Profile: pantograph.Feature{Kind: pantograph.KindProfile,
 				Region: geom.NewRegion(geom.Polygon(geom.V(0, 0), geom.V(tc.w, 0), geom.V(tc.w, tc.h), geom.V(0, tc.h)))}}
-			l := partPicture(part, pantograph.Plan{}, A4(), fonts)
 			var b bytes.Buffer
-			if err := writeSVG(&b, l, fonts); err != nil {
+			if err := EncodePartSVG(&b, part, pantograph.Plan{}, A4()); err != nil {
 				t.Fatal(err)
 			}
 			if want := "Scale " + trim(tc.want) + ":1"; !strings.Contains(b.String(), want) {

@@ -6,6 +6,8 @@ import (
 	"fmt"
 
 	"github.com/tdewolff/canvas"
+
+	"panto/geom"
 )
 
 //go:embed fonts/DejaVuSans.ttf
@@ -47,4 +49,11 @@ func (f *Fonts) Face(size float64, bold bool) *canvas.FontFace {
 // Width returns the width in mm of s set in a face of size points.
 func (f *Fonts) Width(s string, size float64, bold bool) float64 {
 	return f.Face(size, bold).TextWidth(s)
+}
+
+// ink returns the box the glyphs of s take, set in a face of size points with its baseline
+// anchored at the origin as align says, in mm, +Y up.
+func (f *Fonts) ink(s string, size float64, bold bool, align canvas.TextAlign) geom.Box {
+	r := canvas.NewTextLine(f.Face(size, bold), s, align).OutlineBounds()
+	return geom.Box{Min: geom.V(r.X0, r.Y0), Max: geom.V(r.X1, r.Y1)}
 }

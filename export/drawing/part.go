@@ -5,7 +5,6 @@ import (
 	"io"
 	"math"
 	"strconv"
-	"strings"
 
 	"github.com/tdewolff/canvas"
 
@@ -14,8 +13,9 @@ import (
 	"panto/pantograph"
 )
 
-// This file draws the part at a readable enlargement on one page, with its overall dimensions,
-// the datum, each feature's number as on the sheet, and a table of holes and features.
+// This file draws the part at a readable enlargement, with its overall dimensions, the datum,
+// each feature's number as on the sheet, and the feature table (part_table.go) that dimensions
+// every feature from the datum, continued on further pages when it is long.
 
 // partScales are the enlargements tried, largest first: round numbers a machinist can read a
 // rule against (common practice, no source).
@@ -25,201 +25,237 @@ func partScales() []float64 { return []float64{50, 25, 20, 10, 8, 5, 4, 3, 2, 1,
 const (
 	partTop     = 24  // title block at the top of the page
 	dimRoom     = 16  // room for a dimension line left of and below the part
-	tableLine   = 5.2 // one line of the hole table
+	tableLine   = 4.6 // one line of the feature table
 	partShare   = 0.6 // of the page height below the title kept for the picture
 	arrowLength = 2.2
+	partLabel   = 9.0 // size of the feature numbers, points
+	tableGap    = 10  // between the picture and the table
 )
 
-// EncodePartSVG writes the part drawing as an SVG of paper's size, in mm.
+// EncodePartSVG writes the part drawing as one SVG in mm, its pages of paper's printable size
+// one above the other.
 func EncodePartSVG(w io.Writer, part pantograph.Part, p pantograph.Plan, paper Paper) error {
 	fonts, err := LoadFonts()
 	if err != nil {
 		return err
 	}
-	return writeSVG(w, partPicture(part, p, paper, fonts), fonts)
+	l := newPartLayout(part, p, paper, fonts)
+	pages := l.pages()
+	n := float64(len(pages))
+	return writeSVG(w, geom.V(l.size.X, l.size.Y*n), fonts, func(pen Pen) {
+		for i, k := range pages {
+			k.render(pen, geom.V(0, l.size.Y*(n-1-float64(i))), nil)
+		}
+	})
 }
 
-// EncodePartPDF writes the part drawing on one page of paper.
+// EncodePartPDF writes the part drawing on pages of paper.
 func EncodePartPDF(w io.Writer, part pantograph.Part, p pantograph.Plan, paper Paper) error {
 	fonts, err := LoadFonts()
 	if err != nil {
 		return err
 	}
-	pic := partPicture(part, p, paper, fonts)
-	pic.size = geom.V(paper.W-2*Margin, paper.H-2*Margin) // exactly one page
-	return writePDF(w, pic, fonts, paper, true)
+	return writePDF(w, "Part: "+part.Name, partPages(newPartLayout(part, p, paper, fonts), paper), fonts, true)
 }
 
-// partLayout holds the part page's geometry; its frame is the printable area, origin lower left.
+// partPages lays the part's pages on paper, each inside the margins.
+func partPages(l partLayout, paper Paper) []docPage {
+	var out []docPage
+	for _, k := range l.pages() {
+		out = append(out, docPage{paper: paper, draw: func(pen Pen) { k.render(pen, geom.V(Margin, Margin), nil) }})
+	}
+	return out
+}
+
+// partLayout holds the part pages' geometry; a page's frame is its printable area, origin
+// lower left.
 type partLayout struct {
 	part    pantograph.Part
-	numbers map[string]int
+	numbers []int // of each of part.All(), 0 when the plan gives none
 	size    geom.Vec
 	scale   float64
-	t       geom.Transform // part frame → drawing
+	t       geom.Transform // part frame → page one
+	fonts   *Fonts
 }
 
-// partPicture lays out the part on the printable area of paper.
-func partPicture(part pantograph.Part, p pantograph.Plan, paper Paper, fonts *Fonts) picture {
-	l := partLayout{part: part, numbers: map[string]int{}, size: geom.V(paper.W-2*Margin, paper.H-2*Margin)}
-	for _, f := range p.Features {
-		l.numbers[f.Name] = f.Number
-	}
+// newPartLayout lays out the part on the printable area of paper.
+func newPartLayout(part pantograph.Part, p pantograph.Plan, paper Paper, fonts *Fonts) partLayout {
+	l := partLayout{part: part, numbers: featureNumbers(part, p), size: geom.V(paper.W-2*Margin, paper.H-2*Margin), fonts: fonts}
 	b := part.Profile.Region.Bounds()
-	room := geom.V(l.size.X-dimRoom-4, (l.size.Y-partTop)*partShare-dimRoom)
+	room := l.pictureRoom()
 	l.scale = partScales()[len(partScales())-1]
 	for _, s := range partScales() {
-		if sz := b.Size().Mul(s); sz.X <= room.X && sz.Y <= room.Y {
+		if sz := b.Size().Mul(s); sz.X <= room.Size().X && sz.Y <= room.Size().Y {
 			l.scale = s
 			break
 		}
 	}
-	// centre the picture in its room, above the table
 	sz := b.Size().Mul(l.scale)
-	top := l.size.Y - partTop
-	at := geom.V(dimRoom+(room.X-sz.X)/2, top-room.Y+(room.Y-sz.Y)/2)
+	// centred across its room and at the top of it, so the table below starts high
+	at := geom.V(room.Min.X+(room.Size().X-sz.X)/2, room.Max.Y-sz.Y)
 	l.t = geom.Translate(b.Min.Neg()).Then(geom.Scale(l.scale)).Then(geom.Translate(at))
-	return picture{size: l.size, title: "Part: " + part.Name, draw: func(pen Pen, off geom.Vec, _ []geom.Vec) {
-		l.draw(pen, off)
-	}}
+	return l
 }
 
-// draw draws the whole page with its lower left corner at off.
-func (l partLayout) draw(pen Pen, off geom.Vec) {
-	t := l.t.Then(geom.Translate(off))
-	top := off.Y + l.size.Y
-	pen.Text(off.X, top-6, 14, true, "Part: "+l.part.Name, canvas.Left)
-	pen.Text(off.X, top-12, 8.5, false, fmt.Sprintf("Scale %s:1 (the drawing is %s times the part). Dimensions in %s, measured from the datum.",
-		trim(l.scale), trim(l.scale), l.unitWord()), canvas.Left)
-	pen.Text(off.X, top-17, 8.5, false, l.stockWords()+"Numbers # match the dial-reading sheet and the template.", canvas.Left)
-	for _, c := range l.part.Profile.Region.Contours() {
-		pen.Contour(c, t, 0.35)
-	}
-	for _, f := range l.part.Features {
-		l.feature(pen, f, t)
-	}
-	if n := l.numbers[string(pantograph.KindProfile)]; n > 0 && len(l.part.Profile.Region.Outer) > 0 {
-		p := t.Apply(l.part.Profile.Region.Outer[0].A)
-		pen.Text(p.X+1, p.Y+1, 9, true, "#"+strconv.Itoa(n), canvas.Left)
-	}
-	d := t.Apply(l.part.Datum)
-	pen.Circle(d, 1.5, markLine)
-	pen.Cross(d, 3.5, markLine)
-	pen.Text(d.X-4, d.Y+1, 7.5, true, "datum", canvas.Right)
-	l.dimensions(pen, t)
-	l.table(pen, off)
+// pictureRoom is where the part itself goes on page one: below the title, above the table,
+// with room for the dimension lines left and below and for numbers all round.
+func (l partLayout) pictureRoom() geom.Box {
+	top := l.size.Y - partTop
+	bottom := top - (l.size.Y-partTop)*partShare
+	return geom.Box{Min: geom.V(dimRoom+labelReach, bottom+dimRoom), Max: geom.V(l.size.X-labelReach, top-labelReach)}
 }
 
-// feature draws one feature and its number.
-func (l partLayout) feature(pen Pen, f pantograph.Feature, t geom.Transform) {
-	w := 0.25
-	if !f.Opening() {
-		w = 0.15 // blind: a pocket, a blind slot, a groove
-	}
-	var label geom.Vec
-	switch f.Kind {
-	case pantograph.KindHoles:
-		for i, c := range f.Centers {
-			pen.Contour(f.HoleContour(i), t, w)
-			pen.Cross(t.Apply(c), f.Diameter/2*l.scale+1, markLine*0.7)
-		}
-		if len(f.Centers) > 0 {
-			label = t.Apply(f.Centers[0]).Add(geom.V(f.Diameter/2*l.scale, f.Diameter/2*l.scale))
-		}
-	case pantograph.KindGroove:
-		pen.Polyline(f.Path, t, math.Max(f.Width*l.scale, w))
-		if len(f.Path) > 0 {
-			label = t.Apply(f.Path[0])
-		}
-	default:
-		for _, c := range f.Region.Contours() {
-			pen.Contour(c, t, w)
-		}
-		label = t.Apply(f.Region.Bounds().Max)
-	}
-	name := f.Name
-	if name == "" {
-		name = string(f.Kind)
-	}
-	if n := l.numbers[name]; n > 0 {
-		pen.Text(label.X+0.8, label.Y+0.8, 9, true, "#"+strconv.Itoa(n), canvas.Left)
-	}
+// labelArea is where numbers may stand on page one.
+func (l partLayout) labelArea() geom.Box {
+	r := l.pictureRoom()
+	return geom.Box{Min: geom.V(0, r.Min.Y-dimRoom), Max: geom.V(l.size.X, l.size.Y-partTop+2)}
 }
 
-// dimensions draws the overall width below the part and the overall height left of it.
-func (l partLayout) dimensions(pen Pen, t geom.Transform) {
-	b := l.part.Profile.Region.Bounds()
-	lo, hi := t.Apply(b.Min), t.Apply(b.Max)
-	size := b.Size()
-	y := lo.Y - 8
-	pen.Line(geom.V(lo.X, lo.Y-1), geom.V(lo.X, y-2), markLine)
-	pen.Line(geom.V(hi.X, lo.Y-1), geom.V(hi.X, y-2), markLine)
-	pen.Line(geom.V(lo.X, y), geom.V(hi.X, y), markLine)
-	pen.Arrow(geom.V(lo.X, y), geom.V(-1, 0))
-	pen.Arrow(geom.V(hi.X, y), geom.V(1, 0))
-	pen.Text((lo.X+hi.X)/2, y+1.2, 9, false, l.length(size.X), canvas.Center)
-	x := lo.X - 8
-	pen.Line(geom.V(lo.X-1, lo.Y), geom.V(x-2, lo.Y), markLine)
-	pen.Line(geom.V(lo.X-1, hi.Y), geom.V(x-2, hi.Y), markLine)
-	pen.Line(geom.V(x, lo.Y), geom.V(x, hi.Y), markLine)
-	pen.Arrow(geom.V(x, lo.Y), geom.V(0, -1))
-	pen.Arrow(geom.V(x, hi.Y), geom.V(0, 1))
-	pen.Ctx.Push()
-	pen.Ctx.RotateAbout(90, x-1.2, (lo.Y+hi.Y)/2)
-	pen.Text(x-1.2, (lo.Y+hi.Y)/2, 9, false, l.length(size.Y), canvas.Center)
-	pen.Ctx.Pop()
-}
-
-// table lists every hole with its position from the datum, then the other features.
-func (l partLayout) table(pen Pen, off geom.Vec) {
-	y := off.Y + (l.size.Y-partTop)*(1-partShare) - 4
-	cols := []float64{0, 12, 62, 80, 100, 120}
-	head := []string{"#", "feature", "Ø", "X", "Y", "depth"}
-	pen.Text(off.X, y, 10, true, "Holes and features ("+l.unitWord()+"; X and Y from the datum)", canvas.Left)
-	y -= tableLine + 1
-	for i, h := range head {
-		pen.Text(off.X+cols[i], y, 8.5, true, h, canvas.Left)
+// featureNumbers returns the number plan p gives each of part.All(): by place when the plan
+// was made from this part, else by name.
+func featureNumbers(part pantograph.Part, p pantograph.Plan) []int {
+	all := part.All()
+	out := make([]int, len(all))
+	byName := map[string]int{}
+	for _, f := range p.Features {
+		byName[f.Name] = f.Number
 	}
-	pen.Line(geom.V(off.X, y-1.5), geom.V(off.X+150, y-1.5), markLine)
-	rows := l.rows()
-	for i, r := range rows {
-		y -= tableLine
-		if y < off.Y+4 && i < len(rows)-1 {
-			pen.Text(off.X, y, 8.5, false, fmt.Sprintf("… and %d more: see the dial-reading sheet", len(rows)-i), canvas.Left)
-			return
-		}
-		for j, c := range r {
-			pen.Text(off.X+cols[j], y, 8.5, false, c, canvas.Left)
-		}
-	}
-}
-
-// rows gives the table's rows: one per hole, one per other feature.
-func (l partLayout) rows() [][]string {
-	var out [][]string
-	for _, f := range l.part.Features {
+	for i, f := range all {
 		name := f.Name
 		if name == "" {
 			name = string(f.Kind)
 		}
-		no := ""
-		if n := l.numbers[name]; n > 0 {
-			no = "#" + strconv.Itoa(n)
+		if len(p.Features) == len(all) && p.Features[i].Name == name {
+			out[i] = p.Features[i].Number
+		} else {
+			out[i] = byName[name]
 		}
-		if f.Kind == pantograph.KindHoles {
-			for _, c := range f.Centers {
-				p := c.Sub(l.part.Datum)
-				out = append(out, []string{no, name, l.length(f.Diameter), l.length(p.X), l.length(p.Y), l.depth(f.Depth)})
-			}
-			continue
-		}
-		dep := l.depth(f.Depth)
-		if f.Kind == pantograph.KindCutout {
-			dep = "through"
-		}
-		out = append(out, []string{no, name + " (" + string(f.Kind) + ")", "", "", "", dep})
 	}
 	return out
+}
+
+// pages draws page one (title, picture, start of the table) and as many more as the table needs.
+func (l partLayout) pages() []*sketch {
+	first := newSketch(l.fonts)
+	rows := featureRows(l.part, l.numbers)
+	l.picture(first)
+	top := first.bounds().Min.Y - tableGap
+	var pages []*sketch
+	k := first
+	for {
+		n := l.table(k, rows, top)
+		pages = append(pages, k)
+		rows = rows[n:]
+		if len(rows) == 0 {
+			break
+		}
+		if !rows[0].first { // a feature carried over names itself again
+			rows[0].first, rows[0].name = true, rows[0].name+", continued"
+		}
+		k = newSketch(l.fonts)
+		top = l.size.Y - partTop
+	}
+	for i, k := range pages {
+		l.heading(k, i+1, len(pages))
+	}
+	return pages
+}
+
+// heading writes the title block of page number of n.
+func (l partLayout) heading(k *sketch, page, n int) {
+	top := l.size.Y
+	title := "Part: " + l.part.Name
+	if n > 1 {
+		title += fmt.Sprintf(" (page %d of %d)", page, n)
+	}
+	k.text(geom.V(0, top-6), 14, true, title, canvas.Left)
+	k.text(geom.V(0, top-12), 8.5, false, fmt.Sprintf("Scale %s:1 (the drawing is %s times the part). Dimensions in %s, measured from the datum.",
+		trim(l.scale), trim(l.scale), l.unitWord()), canvas.Left)
+	k.text(geom.V(0, top-17), 8.5, false, l.stockWords()+"Numbers # match the dial-reading sheet and the template.", canvas.Left)
+}
+
+// picture draws the part, its datum, its overall dimensions and the feature numbers.
+func (l partLayout) picture(k *sketch) {
+	var jobs []labelJob
+	for i, f := range l.part.All() {
+		own, anchors := l.feature(k, f)
+		if l.numbers[i] > 0 {
+			jobs = append(jobs, labelJob{text: "#" + strconv.Itoa(l.numbers[i]), size: partLabel, bold: true, own: own, anchors: anchors})
+		}
+	}
+	d := l.t.Apply(l.part.Datum)
+	k.circle(d, 1.5, markLine)
+	k.cross(d, 3.5, markLine)
+	jobs = append(jobs, datumJob(d, 1.5, 7.5))
+	l.dimensions(k)
+	placeLabels(k, l.labelArea(), jobs)
+}
+
+// datumJob is the label job for the word "datum" beside a datum mark of radius r at d.
+func datumJob(d geom.Vec, r, size float64) labelJob {
+	return labelJob{text: "datum", size: size, bold: true, own: [][]geom.Vec{circleChain(d, r)}, anchors: []anchor{{at: d, r: r}}}
+}
+
+// feature draws one feature and returns its lines (for measuring how near a number is) and
+// the places round it to try its number.
+func (l partLayout) feature(k *sketch, f pantograph.Feature) ([][]geom.Vec, []anchor) {
+	w := 0.25
+	switch {
+	case f.Kind == pantograph.KindProfile:
+		w = 0.35
+	case !f.Opening():
+		w = 0.15 // blind: a pocket, a blind slot, a groove
+	}
+	switch f.Kind {
+	case pantograph.KindHoles:
+		var own [][]geom.Vec
+		var anchors []anchor
+		r := f.Diameter / 2 * l.scale
+		for i, c := range f.Centers {
+			p := l.t.Apply(c)
+			k.contour(f.HoleContour(i), l.t, w)
+			k.cross(p, r+1, markLine*0.7)
+			own = append(own, circleChain(p, r))
+			if i < maxLabelHole {
+				anchors = append(anchors, anchor{at: p, r: r})
+			}
+		}
+		return own, anchors
+	case pantograph.KindGroove:
+		k.path(f.Path, l.t, math.Max(f.Width*l.scale, w))
+		own := [][]geom.Vec{mapPoints(f.Path, l.t)}
+		return own, alongChains(own, math.Max(f.Width*l.scale, w)/2)
+	}
+	var own [][]geom.Vec
+	for _, c := range f.Region.Contours() {
+		k.contour(c, l.t, w)
+		if ctr, r, ok := circleOf(c); ok {
+			k.cross(l.t.Apply(ctr), math.Min(r*l.scale/2, 3), markLine*0.7)
+		}
+		own = append(own, closedChain(c, l.t))
+	}
+	return own, alongChains(own, 0)
+}
+
+// dimensions draws the overall width below the part and the overall height left of it.
+func (l partLayout) dimensions(k *sketch) {
+	b := l.part.Profile.Region.Bounds()
+	lo, hi := l.t.Apply(b.Min), l.t.Apply(b.Max)
+	size := b.Size()
+	y := lo.Y - 8
+	k.line(geom.V(lo.X, lo.Y-1), geom.V(lo.X, y-2), markLine)
+	k.line(geom.V(hi.X, lo.Y-1), geom.V(hi.X, y-2), markLine)
+	k.line(geom.V(lo.X, y), geom.V(hi.X, y), markLine)
+	k.arrow(geom.V(lo.X, y), geom.V(-1, 0))
+	k.arrow(geom.V(hi.X, y), geom.V(1, 0))
+	k.text(geom.V((lo.X+hi.X)/2, y+1.2), 9, false, l.length(size.X), canvas.Center)
+	x := lo.X - 8
+	k.line(geom.V(lo.X-1, lo.Y), geom.V(x-2, lo.Y), markLine)
+	k.line(geom.V(lo.X-1, hi.Y), geom.V(x-2, hi.Y), markLine)
+	k.line(geom.V(x, lo.Y), geom.V(x, hi.Y), markLine)
+	k.arrow(geom.V(x, lo.Y), geom.V(0, -1))
+	k.arrow(geom.V(x, hi.Y), geom.V(0, 1))
+	k.turnedText(geom.V(x-1.2, (lo.Y+hi.Y)/2), 9, false, l.length(size.Y), canvas.Center, 90)
 }
 
 // unitWord names the units the part was drawn in, which the drawing's numbers are given in.
@@ -258,5 +294,12 @@ func (l partLayout) stockWords() string {
 	if len(w) == 0 {
 		return ""
 	}
-	return "Stock: " + strings.Join(w, ", ") + ". "
+	out := "Stock: "
+	for i, s := range w {
+		if i > 0 {
+			out += ", "
+		}
+		out += s
+	}
+	return out + ". "
 }

@@ -27,15 +27,17 @@ const (
 	sideMargin  = 3.0  // around the drawing; a printed page has its own margin besides
 	leftMargin  = 16.0 // room for the datum's label left of a datum on the template's edge
 	minSeatMark = 1.0  // radius of the mark for a pointed stylus's seat
+	noteWidth   = 165  // longest line of the footer's notes: within a page less leftMargin
+	noteLine    = 3.5  // between the footer's lines of notes
+	templLabel  = 9.0  // size of the feature numbers, points
 )
 
 // templateLayout is where everything goes on the template drawing, in drawing mm: the drawing's
 // own frame has its origin at the lower left corner.
 type templateLayout struct {
 	p      pantograph.Plan
-	size   geom.Vec   // the whole drawing
-	origin geom.Vec   // where the template frame's origin (the datum seat) lands
-	marks  []geom.Vec // tiling alignment marks, drawing mm
+	size   geom.Vec // the whole drawing
+	origin geom.Vec // where the template frame's origin (the datum seat) lands
 	fonts  *Fonts
 }
 
@@ -49,92 +51,125 @@ func newTemplateLayout(p pantograph.Plan, fonts *Fonts) templateLayout {
 	return l
 }
 
-// draw draws the whole template with the drawing's origin at off on the page.
-func (l templateLayout) draw(pen Pen, off geom.Vec) {
-	t := geom.Translate(l.origin.Add(off))
+// sketch draws the whole template, its footer and its numbers.
+func (l templateLayout) sketch() *sketch {
+	k := newSketch(l.fonts)
+	t := geom.Translate(l.origin)
+	var jobs []labelJob
 	for _, f := range l.p.Features {
-		l.feature(pen, f, t)
+		own, anchors := l.feature(k, f, t)
+		if f.Number > 0 && len(own) > 0 {
+			jobs = append(jobs, labelJob{text: "#" + strconv.Itoa(f.Number), size: templLabel, bold: true, own: own, anchors: anchors})
+		}
 	}
 	o := t.Apply(geom.Vec{})
-	pen.Circle(o, 3, edgeLine)
-	pen.Cross(o, 6, markLine)
-	pen.Text(o.X-6.5, o.Y+1, 8, true, "datum", canvas.Right)
-	l.footer(pen, off)
-	for _, m := range l.marks {
-		c := m.Add(off)
-		pen.Circle(c, 2.5, markLine)
-		pen.Cross(c, 5, markLine)
+	k.circle(o, 3, edgeLine)
+	k.cross(o, 6, markLine)
+	jobs = append(jobs, datumJob(o, 3, 8))
+	l.footer(k)
+	placeLabels(k, geom.Box{Max: l.size}, jobs)
+	return k
+}
+
+// profile reports whether a drawing point lies on the template's profile.
+func (l templateLayout) profile() func(geom.Vec) bool {
+	return func(p geom.Vec) bool {
+		q := p.Sub(l.origin)
+		for _, f := range l.p.Features {
+			if f.Kind != pantograph.KindProfile {
+				continue
+			}
+			for _, r := range f.TemplateRegions {
+				if r.Contains(q) {
+					return true
+				}
+			}
+		}
+		return false
 	}
 }
 
-// feature draws one feature's traced edges, seats or groove, and its number.
-func (l templateLayout) feature(pen Pen, f pantograph.PlannedFeature, t geom.Transform) {
+// feature draws one feature's traced edges, seats or groove, and returns its lines and the
+// places round it to try its number.
+func (l templateLayout) feature(k *sketch, f pantograph.PlannedFeature, t geom.Transform) ([][]geom.Vec, []anchor) {
+	var own [][]geom.Vec
 	for _, r := range f.TemplateRegions {
 		for _, c := range r.Contours() {
-			pen.Contour(c, t, edgeLine)
+			k.contour(c, t, edgeLine)
+			own = append(own, closedChain(c, t))
 		}
 	}
+	anchors := alongChains(own, 0)
 	r := f.Stylus / 2
 	if f.Tip == pantograph.TipPointed || r < minSeatMark {
 		r = minSeatMark
 	}
-	for _, s := range f.Seats {
+	for i, s := range f.Seats {
 		c := t.Apply(s)
-		pen.Circle(c, r, edgeLine)
-		pen.Cross(c, r+1.5, markLine)
-	}
-	pen.Polyline(f.Path, t, edgeLine)
-	if f.Number > 0 {
-		for _, at := range labelPlaces(f) {
-			p := t.Apply(at)
-			pen.Text(p.X+0.8, p.Y+0.8, 9, true, "#"+strconv.Itoa(f.Number), canvas.Left)
+		k.circle(c, r, edgeLine)
+		k.cross(c, r+1.5, markLine)
+		own = append(own, circleChain(c, r))
+		if i < maxLabelHole {
+			anchors = append(anchors, anchor{at: c, r: r})
 		}
 	}
-}
-
-// labelPlaces are where a feature's number goes, in the template frame: beside its first seat,
-// at the start of a groove, at the start of the profile's outline, and just off the upper right
-// of each opening, where it does not sit on a hole inside it.
-func labelPlaces(f pantograph.PlannedFeature) []geom.Vec {
-	switch {
-	case len(f.Seats) > 0:
-		return []geom.Vec{f.Seats[0].Add(geom.V(f.Stylus/2, f.Stylus/2))}
-	case len(f.Path) > 0:
-		return []geom.Vec{f.Path[0]}
-	case f.Kind == pantograph.KindProfile && len(f.TemplateRegions) > 0 && len(f.TemplateRegions[0].Outer) > 0:
-		return []geom.Vec{f.TemplateRegions[0].Outer[0].A}
+	if len(f.Path) > 1 {
+		k.path(f.Path, t, edgeLine)
+		path := mapPoints(f.Path, t)
+		own = append(own, path)
+		anchors = append(anchors, alongChains([][]geom.Vec{path}, 0)...)
 	}
-	var out []geom.Vec
-	for _, r := range f.TemplateRegions {
-		out = append(out, r.Bounds().Max)
-	}
-	return out
+	return own, anchors
 }
 
 // footer draws the title lines, the check bar and the test square below the template.
-func (l templateLayout) footer(pen Pen, off geom.Vec) {
-	x, y := off.X+leftMargin, off.Y+sideMargin
+func (l templateLayout) footer(k *sketch) {
+	x, y := leftMargin, sideMargin
 	p := l.p
-	pen.Text(x, y+32, 11, true, "Template: "+p.Part, canvas.Left)
-	pen.Text(x, y+28, 8, false, templateScaleNote(p), canvas.Left)
-	pen.Text(x, y+24, 8, false, "Print at actual size (100 %, never \"fit to page\"); check the bar and square before use.", canvas.Left)
+	k.text(geom.V(x, y+34), 11, true, "Template: "+p.Part, canvas.Left)
+	notes := wrap(l.fonts, templateScaleNote(p), 8, noteWidth)
+	notes = append(notes, wrap(l.fonts, "Print at actual size (100 %, never \"fit to page\"); check the bar and square before use.", 8, noteWidth)...)
+	for i, s := range notes {
+		k.text(geom.V(x, y+29.5-float64(i)*noteLine), 8, false, s, canvas.Left)
+	}
 	// check bar with a tick every 10 mm
 	by := y + 8
-	pen.Line(geom.V(x, by), geom.V(x+checkBar, by), 0.35)
+	k.line(geom.V(x, by), geom.V(x+checkBar, by), 0.35)
 	for i := 0; i <= 10; i++ {
 		tick := 1.5
 		if i%5 == 0 {
 			tick = 3
 		}
-		pen.Line(geom.V(x+float64(i)*10, by), geom.V(x+float64(i)*10, by+tick), markLine)
+		k.line(geom.V(x+float64(i)*10, by), geom.V(x+float64(i)*10, by+tick), markLine)
 	}
-	pen.Text(x, by-4, 7, false, "0", canvas.Center)
-	pen.Text(x+checkBar, by-4, 7, false, "100 mm", canvas.Center)
-	pen.Text(x+checkBar/2, by-4, 7, false, "check bar: 100 mm", canvas.Center)
+	k.text(geom.V(x, by-4), 7, false, "0", canvas.Center)
+	k.text(geom.V(x+checkBar, by-4), 7, false, "100 mm", canvas.Center)
+	k.text(geom.V(x+checkBar/2, by-4), 7, false, "check bar: 100 mm", canvas.Center)
 	sx := x + checkBar + 15
-	pen.Rect(geom.Box{Min: geom.V(sx, y+1), Max: geom.V(sx+testSquare, y+1+testSquare)}, 0.3)
-	pen.Text(sx+testSquare/2, y+12, 7, false, "test square", canvas.Center)
-	pen.Text(sx+testSquare/2, y+8.5, 7, false, "20 × 20 mm", canvas.Center)
+	k.rect(geom.Box{Min: geom.V(sx, y+1), Max: geom.V(sx+testSquare, y+1+testSquare)}, 0.3)
+	k.text(geom.V(sx+testSquare/2, y+12), 7, false, "test square", canvas.Center)
+	k.text(geom.V(sx+testSquare/2, y+8.5), 7, false, "20 × 20 mm", canvas.Center)
+}
+
+// wrap breaks s into lines no wider than width mm set in a face of size points.
+func wrap(fonts *Fonts, s string, size, width float64) []string {
+	var lines []string
+	line := ""
+	for _, w := range strings.Fields(s) {
+		next := w
+		if line != "" {
+			next = line + " " + w
+		}
+		if line != "" && fonts.Width(next, size, false) > width {
+			lines = append(lines, line)
+			next = w
+		}
+		line = next
+	}
+	if line != "" {
+		lines = append(lines, line)
+	}
+	return lines
 }
 
 // templateScaleNote states units and scale in words.
