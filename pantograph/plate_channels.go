@@ -161,7 +161,7 @@ func overlapping(rs []geom.Region, b geom.Box) []geom.Region {
 // channelAt names the first channel that shares area with r.
 func (d *plateDesign) channelAt(chs []channel, r geom.Region) string {
 	for _, c := range chs {
-		if c.box.Overlaps(r.Bounds()) && area(geom.Intersection(c.regions, []geom.Region{r})) > meetArea {
+		if c.box.Overlaps(r.Bounds()) && areaOf(geom.Intersection(c.regions, []geom.Region{r})) > meetArea {
 			return c.label
 		}
 	}
@@ -214,7 +214,7 @@ func (d *plateDesign) noteMeets(chs []channel) {
 			if !a.band && !b.band || a.label == b.label || !a.box.Overlaps(b.box) {
 				continue
 			}
-			if area(geom.Intersection(a.regions, b.regions)) > meetArea {
+			if areaOf(geom.Intersection(a.regions, b.regions)) > meetArea {
 				d.pl.Notes = append(d.pl.Notes, fmt.Sprintf("the channels of %s and %s meet: there the stylus is guided on one side only", a.label, b.label))
 			}
 		}

@@ -174,16 +174,16 @@ func datumArrowAt(c geom.Vec, r, a float64) geom.Region {
 func (d *plateDesign) markHits(m geom.Region, own int) string {
 	g := m.Offset(labelGap).Regions
 	gb := m.Bounds().Expand(labelGap)
-	ga := area(g)
+	ga := areaOf(g)
 	split := func(x geom.Region) bool {
 		if !x.Bounds().Overlaps(gb) {
 			return false
 		}
-		a := area(geom.Intersection(g, []geom.Region{x}))
+		a := areaOf(geom.Intersection(g, []geom.Region{x}))
 		return a > meetArea && a < ga-meetArea
 	}
 	meet := func(x geom.Region) bool {
-		return x.Bounds().Overlaps(gb) && area(geom.Intersection(g, []geom.Region{x})) > meetArea
+		return x.Bounds().Overlaps(gb) && areaOf(geom.Intersection(g, []geom.Region{x})) > meetArea
 	}
 	for _, r := range d.islands {
 		if split(r) {

@@ -145,10 +145,10 @@ func (pl planner) oversizeLoss(pf PlannedFeature, rs []geom.Region, inside bool)
 	}
 	var want, got float64
 	for _, r := range rs {
-		want += regionsArea(r.Transform(pl.t).Offset(side * pl.setup.Ratio * rc).Regions)
+		want += areaOf(r.Transform(pl.t).Offset(side * pl.setup.Ratio * rc).Regions)
 	}
 	for _, tr := range pf.TemplateRegions {
-		got += regionsArea(tr.Offset(side * rs2).Regions)
+		got += areaOf(tr.Offset(side * rs2).Regions)
 	}
 	r2 := pl.setup.Ratio * pl.setup.Ratio
 	lost := math.Abs(want-got) / r2 // mm² at the part
@@ -164,15 +164,6 @@ func (pl planner) oversizeLoss(pf PlannedFeature, rs []geom.Region, inside bool)
 // path and the cutter path count as the same: the offsets are exact, so only rounding differs,
 // some twelve orders of magnitude below this.
 const oversizeAreaTol = 1e-7
-
-// regionsArea is the total area of rs.
-func regionsArea(rs []geom.Region) float64 {
-	var a float64
-	for _, r := range rs {
-		a += r.Area()
-	}
-	return a
-}
 
 // holes plans a holes feature: seats for a drill, or traced openings when the holes are milled.
 func (pl planner) holes(pf PlannedFeature, f Feature) (PlannedFeature, []Problem) {
