@@ -109,7 +109,7 @@ const (
 type numberJob struct {
 	f       PlannedFeature
 	text    string
-	edges   []edgePiece
+	edges   geom.PolylineIndex
 	anchors []numberAnchor
 }
 
@@ -184,7 +184,7 @@ func (d *plateDesign) numberJobs() []numberJob {
 			edges = append(edges, f.Path)
 			j.anchors = append(j.anchors, alongEdges([][]geom.Vec{f.Path}, f.Width/2)...)
 		}
-		j.edges = edgePieces(edges)
+		j.edges = geom.NewPolylineIndex(edges)
 		jobs = append(jobs, j)
 	}
 	return jobs
@@ -213,14 +213,14 @@ func (n numberer) places(jobs []numberJob, i int) []numberPlace {
 					if !n.free(box) {
 						continue
 					}
-					own := edgesBoxDist(j.edges, box, reach)
+					own := j.edges.BoxDistance(box, reach)
 					if own > reach {
 						continue
 					}
 					rival := math.Inf(1)
 					for k := range jobs {
 						if k != i {
-							rival = min(rival, edgesBoxDist(jobs[k].edges, box, own+rivalSlack))
+							rival = min(rival, jobs[k].edges.BoxDistance(box, own+rivalSlack))
 						}
 					}
 					score := own + rivalCost*math.Max(0, own+rivalSlack-rival) + 0.1*(2-dir.X-dir.Y)
@@ -237,25 +237,11 @@ func (n numberer) places(jobs []numberJob, i int) []numberPlace {
 }
 
 // alongEdges returns places of radius r every numberStep along the chains, spaced wider on
-// long outlines so there are at most maxNumberAnchors.
+// long outlines so there are about maxNumberAnchors.
 func alongEdges(chains [][]geom.Vec, r float64) []numberAnchor {
-	total := 0.0
-	for _, c := range chains {
-		for k := 1; k < len(c); k++ {
-			total += c[k].Dist(c[k-1])
-		}
-	}
-	step := math.Max(numberStep, total/maxNumberAnchors)
 	var out []numberAnchor
-	for _, c := range chains {
-		left := 0.0
-		for k := 1; k < len(c); k++ {
-			l := c[k].Dist(c[k-1])
-			for ; l > 0 && left <= l; left += step {
-				out = append(out, numberAnchor{at: c[k-1].Lerp(c[k], left/l), r: r})
-			}
-			left -= l
-		}
+	for _, p := range geom.PointsAlong(chains, numberStep, maxNumberAnchors) {
+		out = append(out, numberAnchor{at: p, r: r})
 	}
 	return out
 }
@@ -332,106 +318,10 @@ func boxMeets(b geom.Box, r geom.Region, edges [][]geom.Vec) bool {
 func boxCrossed(b geom.Box, chains [][]geom.Vec) bool {
 	for _, c := range chains {
 		for k := 1; k < len(c); k++ {
-			if segmentMeetsBox(c[k-1], c[k], b) {
+			if b.MeetsSegment(c[k-1], c[k]) {
 				return true
 			}
 		}
 	}
 	return false
-}
-
-// edgePiece is a run of at most pieceLength points of an edge, with its box, so a measure
-// passes over the pieces far from the box it measures (a speed choice).
-type edgePiece struct {
-	pts []geom.Vec
-	box geom.Box
-}
-
-const pieceLength = 16
-
-// edgePieces cuts chains into pieces.
-func edgePieces(chains [][]geom.Vec) []edgePiece {
-	var out []edgePiece
-	for _, c := range chains {
-		for k := 0; k == 0 || k < len(c)-1; k += pieceLength - 1 {
-			pts := c[k:min(len(c), k+pieceLength)]
-			b := geom.EmptyBox()
-			for _, p := range pts {
-				b = b.AddPoint(p)
-			}
-			out = append(out, edgePiece{pts: pts, box: b})
-		}
-	}
-	return out
-}
-
-// edgesBoxDist returns the least distance from box b to the pieces, 0 when one enters it;
-// a distance beyond limit may come out as any value beyond it.
-func edgesBoxDist(pieces []edgePiece, b geom.Box, limit float64) float64 {
-	best := math.Inf(1)
-	for _, e := range pieces {
-		if boxesGap(e.box, b) > min(best, limit) {
-			continue
-		}
-		for k := 1; k < len(e.pts); k++ {
-			p, q := e.pts[k-1], e.pts[k]
-			if segmentMeetsBox(p, q, b) {
-				return 0
-			}
-			best = min(best, boxGap(p, b), boxGap(q, b))
-			for _, v := range []geom.Vec{b.Min, b.Max, geom.V(b.Min.X, b.Max.Y), geom.V(b.Max.X, b.Min.Y)} {
-				best = min(best, pointSegment(v, p, q))
-			}
-		}
-	}
-	return best
-}
-
-// pointSegment returns the distance from v to the segment p–q.
-func pointSegment(v, p, q geom.Vec) float64 {
-	d := q.Sub(p)
-	t := 0.0
-	if l2 := d.Dot(d); l2 > 0 {
-		t = max(0, min(1, v.Sub(p).Dot(d)/l2))
-	}
-	w := p.Add(d.Mul(t)).Sub(v)
-	return math.Sqrt(w.X*w.X + w.Y*w.Y)
-}
-
-// boxesGap returns the gap between boxes a and b, 0 when they overlap.
-func boxesGap(a, b geom.Box) float64 {
-	dx, dy := max(0, a.Min.X-b.Max.X, b.Min.X-a.Max.X), max(0, a.Min.Y-b.Max.Y, b.Min.Y-a.Max.Y)
-	return math.Sqrt(dx*dx + dy*dy)
-}
-
-// segmentMeetsBox reports whether segment p–q has a point in box b (Liang–Barsky clipping).
-func segmentMeetsBox(p, q geom.Vec, b geom.Box) bool {
-	if max(p.X, q.X) < b.Min.X || min(p.X, q.X) > b.Max.X || max(p.Y, q.Y) < b.Min.Y || min(p.Y, q.Y) > b.Max.Y {
-		return false
-	}
-	t0, t1 := 0.0, 1.0
-	dx, dy := q.X-p.X, q.Y-p.Y
-	for _, e := range [4][2]float64{{-dx, p.X - b.Min.X}, {dx, b.Max.X - p.X}, {-dy, p.Y - b.Min.Y}, {dy, b.Max.Y - p.Y}} {
-		if e[0] == 0 {
-			if e[1] < 0 {
-				return false
-			}
-			continue
-		}
-		if r := e[1] / e[0]; e[0] < 0 {
-			t0 = max(t0, r)
-		} else {
-			t1 = min(t1, r)
-		}
-		if t0 > t1 {
-			return false
-		}
-	}
-	return true
-}
-
-// boxGap returns the distance from p to box b, 0 inside it.
-func boxGap(p geom.Vec, b geom.Box) float64 {
-	dx, dy := max(0, b.Min.X-p.X, p.X-b.Max.X), max(0, b.Min.Y-p.Y, p.Y-b.Max.Y)
-	return math.Sqrt(dx*dx + dy*dy)
 }

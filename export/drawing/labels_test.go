@@ -78,7 +78,7 @@ func orNone(s string) string {
 // featureShape is a feature's drawn geometry in page mm and the number it should carry.
 type featureShape struct {
 	number int
-	chains []chain
+	chains geom.PolylineIndex
 }
 
 // checkNumbers checks the numbers lettered on one recorded picture: the texts "#n" whose ink
@@ -97,12 +97,12 @@ func checkNumbers(t *testing.T, r *recorder, area geom.Box, shapes []featureShap
 			t.Errorf("%s at %v is %.2f mm from a line (%d points from %v), want at least %v", tx.s, tx.box, gap, len(l.pts), l.pts[0], minLabelGap)
 		}
 		for _, f := range r.fills {
-			if boxDist(f, tx.box) < minLabelGap {
+			if f.Gap(tx.box) < minLabelGap {
 				t.Errorf("%s at %v touches an arrowhead at %v", tx.s, tx.box, f)
 			}
 		}
 		for j, other := range r.texts {
-			if j != i && boxDist(other.box, tx.box) < minLabelGap {
+			if j != i && other.box.Gap(tx.box) < minLabelGap {
 				t.Errorf("%s at %v touches the text %q at %v", tx.s, tx.box, other.s, other.box)
 			}
 		}
@@ -113,7 +113,7 @@ func checkNumbers(t *testing.T, r *recorder, area geom.Box, shapes []featureShap
 			t.Errorf("#%d is lettered %d times, want once", f.number, len(boxes))
 			continue
 		}
-		if d := chainsBoxDist(f.chains, boxes[0], 1e9); d > labelPromise {
+		if d := f.chains.BoxDistance(boxes[0], 1e9); d > labelPromise {
 			t.Errorf("#%d stands %.2f mm from its feature, want at most %v", f.number, d, labelPromise)
 		}
 		delete(seen, f.number)
@@ -162,11 +162,11 @@ func tableTop(t *testing.T, r *recorder) float64 {
 }
 
 // partShape returns a part feature's exact outline mapped by tr, finely flattened.
-func partShape(f pantograph.Feature, tr geom.Transform) []chain {
-	var out []chain
+func partShape(f pantograph.Feature, tr geom.Transform) geom.PolylineIndex {
+	var out geom.PolylineIndex
 	add := func(c geom.Contour) {
 		pts := c.Transform(tr).Flatten(0.005)
-		out = append(out, newChains(append(pts, pts[0]))...)
+		out.Add(append(pts, pts[0]))
 	}
 	switch f.Kind {
 	case pantograph.KindHoles:
@@ -174,7 +174,7 @@ func partShape(f pantograph.Feature, tr geom.Transform) []chain {
 			add(f.HoleContour(i))
 		}
 	case pantograph.KindGroove:
-		out = append(out, newChains(mapPoints(f.Path, tr))...)
+		out.Add(mapPoints(f.Path, tr))
 	default:
 		for _, c := range f.Region.Contours() {
 			add(c)
@@ -196,7 +196,7 @@ func templateShapes(l templateLayout, tr geom.Transform) []featureShape {
 		for _, r := range f.TemplateRegions {
 			for _, c := range r.Contours() {
 				pts := c.Transform(t).Flatten(0.005)
-				s.chains = append(s.chains, newChains(append(pts, pts[0]))...)
+				s.chains.Add(append(pts, pts[0]))
 			}
 		}
 		r := f.Stylus / 2 // the seat's mark as drawn: the stylus's circle, or a small one for a point
@@ -204,12 +204,12 @@ func templateShapes(l templateLayout, tr geom.Transform) []featureShape {
 			r = minSeatMark
 		}
 		for _, p := range f.Seats {
-			s.chains = append(s.chains, newChains(circleChain(t.Apply(p), r))...)
+			s.chains.Add(circleChain(t.Apply(p), r))
 		}
 		if len(f.Path) > 1 {
-			s.chains = append(s.chains, newChains(mapPoints(f.Path, t))...)
+			s.chains.Add(mapPoints(f.Path, t))
 		}
-		if len(s.chains) > 0 {
+		if !s.chains.Empty() {
 			out = append(out, s)
 		}
 	}

@@ -49,7 +49,7 @@ type labelJob struct {
 	bold    bool
 	own     [][]geom.Vec // the feature's drawn lines, each a chain of points
 	anchors []anchor
-	chains  []chain // own, with boxes
+	chains  geom.PolylineIndex // own, indexed
 }
 
 // candidate is one place for a label: its ink box and score (lower is better).
@@ -76,9 +76,7 @@ func placeLabels(k *sketch, area geom.Box, jobs []labelJob) []geom.Box {
 	cands := make([][]candidate, len(jobs))
 	order := make([]int, len(jobs))
 	for i := range jobs {
-		for _, c := range jobs[i].own {
-			jobs[i].chains = append(jobs[i].chains, newChains(c)...)
-		}
+		jobs[i].chains = geom.NewPolylineIndex(jobs[i].own)
 	}
 	for i, j := range jobs {
 		cands[i] = p.candidates(i, j, labelReach)
@@ -172,7 +170,7 @@ func (p *placer) candidates(i int, j labelJob, reach float64) []candidate {
 				if !p.free(box) {
 					continue
 				}
-				own := chainsBoxDist(j.chains, box, reach)
+				own := j.chains.BoxDistance(box, reach)
 				if own > reach {
 					continue
 				}
@@ -192,7 +190,7 @@ func (p *placer) rivalDist(i int, b geom.Box, limit float64) float64 {
 	best := math.Inf(1)
 	for k, j := range p.jobs {
 		if k != i {
-			best = math.Min(best, chainsBoxDist(j.chains, b, limit))
+			best = math.Min(best, j.chains.BoxDistance(b, limit))
 		}
 	}
 	return best
@@ -252,33 +250,11 @@ func mapPoints(pts []geom.Vec, t geom.Transform) []geom.Vec {
 }
 
 // alongChains returns anchors of radius r every anchorStep along the chains, spaced wider on
-// long outlines so there are at most maxAnchors.
+// long outlines so there are about maxAnchors.
 func alongChains(chains [][]geom.Vec, r float64) []anchor {
-	total := 0.0
-	for _, c := range chains {
-		for i := 1; i < len(c); i++ {
-			total += c[i].Dist(c[i-1])
-		}
-	}
-	step := math.Max(anchorStep, total/maxAnchors)
 	var out []anchor
-	for _, c := range chains {
-		if len(c) == 1 {
-			out = append(out, anchor{at: c[0], r: r})
-		}
-		left := 0.0 // distance to the next anchor
-		for i := 1; i < len(c); i++ {
-			a, b := c[i-1], c[i]
-			l := b.Dist(a)
-			if l == 0 {
-				continue
-			}
-			for left <= l {
-				out = append(out, anchor{at: a.Lerp(b, left/l), r: r})
-				left += step
-			}
-			left -= l
-		}
+	for _, p := range geom.PointsAlong(chains, anchorStep, maxAnchors) {
+		out = append(out, anchor{at: p, r: r})
 	}
 	return out
 }

@@ -86,10 +86,10 @@ var numberText = regexp.MustCompile(`^#([0-9]+)$`)
 func (r *recorder) lineGap(b geom.Box) (float64, recLine) {
 	best, at := 1e9, recLine{}
 	for _, l := range r.lines {
-		if boxDist(l.box, b) > best {
+		if l.box.Gap(b) > best {
 			continue
 		}
-		if d := chainsBoxDist([]chain{{pts: l.pts, box: l.box}}, b, best+l.width) - l.width/2; d < best {
+		if d := geom.NewPolylineIndex([][]geom.Vec{l.pts}).BoxDistance(b, best+l.width) - l.width/2; d < best {
 			best, at = d, l
 		}
 	}

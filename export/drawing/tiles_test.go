@@ -108,12 +108,12 @@ func checkMarks(t *testing.T, whole *recorder, marks []geom.Vec, tl tiling) {
 			if own(l) {
 				continue
 			}
-			if d := chainsBoxDist([]chain{{pts: l.pts, box: l.box}}, b, 10) - l.width/2; d < minMarkGap {
+			if d := geom.NewPolylineIndex([][]geom.Vec{l.pts}).BoxDistance(b, 10) - l.width/2; d < minMarkGap {
 				t.Errorf("mark at %v is %.2f mm from a line of the template, want at least %v", m, d, minMarkGap)
 			}
 		}
 		for _, tx := range whole.texts {
-			if d := boxDist(tx.box, b); d < minMarkGap {
+			if d := tx.box.Gap(b); d < minMarkGap {
 				t.Errorf("mark at %v is %.2f mm from %q", m, d, tx.s)
 			}
 		}
