@@ -190,7 +190,7 @@ func (e *encoder) segment(layer string, s geom.Segment) {
 		e.point(11, s.B)
 		return
 	}
-	if math.Abs(s.Sweep) >= 2*math.Pi-1e-12 {
+	if s.IsFullCircle() {
 		e.circle(layer, s.Center, s.Radius())
 		return
 	}
@@ -225,7 +225,7 @@ type vertex struct {
 // bulge (its tangent is infinite) and is written as two halves.
 func (e *encoder) outline(o Outline) {
 	c := o.Contour
-	if len(c) == 1 && c[0].IsArc() {
+	if len(c) == 1 && c[0].IsFullCircle() {
 		e.circle(o.Layer, c[0].Center, c[0].Radius())
 		return
 	}

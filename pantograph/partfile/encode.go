@@ -147,7 +147,7 @@ func (w *writer) outlineTable(header string, f pantograph.Feature) error {
 
 // shape writes a contour as a circle, a list of points, or a path of lines and arcs.
 func (w *writer) shape(c geom.Contour) {
-	if len(c) == 1 && c[0].IsArc() {
+	if len(c) == 1 && c[0].IsFullCircle() {
 		w.linef("circle = { center = %s, diameter = %s }", w.point(c[0].Center), w.num(2*c[0].Radius()))
 		return
 	}
