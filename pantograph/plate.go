@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strings"
 
 	"panto/geom"
 )
@@ -271,7 +272,8 @@ func newPlateDesign(p Plan, m *Machine, o PlateOptions) *plateDesign {
 		d.pl.Base = plateBase + d.pl.WallHeight
 		d.surface, d.islandTop = d.pl.Base, d.pl.Base
 	}
-	d.pl.Title = fmt.Sprintf("%s %g:1 STYLUS %g CUTTER %g", p.Part, p.Setup.Ratio, d.stylus, p.Setup.Cutter)
+	d.pl.Title = fmt.Sprintf("%s %g:1 STYLUS %s CUTTER %s", p.Part, p.Setup.Ratio,
+		strings.ToUpper(p.Units.Length(d.stylus)), strings.ToUpper(p.Units.Length(p.Setup.Cutter)))
 	d.newFixing(m)
 	return d
 }

@@ -118,6 +118,11 @@ func makeAll(path string, setup pantograph.Setup, o planFlags, mo makeFlags,
 		return failf("make", "%v", err)
 	}
 	stdout.Write(report.Bytes())
+	fmt.Fprintf(stdout, "wrote %d files in %s:", len(files), mo.out)
+	for _, f := range files {
+		fmt.Fprintf(stdout, " %s", f.name)
+	}
+	fmt.Fprintln(stdout)
 	warnPlan(stderr, p)
 	return nil
 }

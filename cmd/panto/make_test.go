@@ -56,6 +56,16 @@ func TestMakeSamples(t *testing.T) {
 						t.Errorf("report lacks %q:\n%s", frag, stdout)
 					}
 				}
+				// The summary names every file the folder now holds.
+				entries, err := os.ReadDir(dir)
+				if err != nil {
+					t.Fatal(err)
+				}
+				for _, e := range entries {
+					if !strings.Contains(stdout, " "+e.Name()) {
+						t.Errorf("the summary does not list %s:\n%s", e.Name(), stdout)
+					}
+				}
 				for _, name := range []string{"sheet.txt", "template.svg", "template.dxf", "part.dxf"} {
 					if _, err := os.Stat(filepath.Join(dir, name)); err != nil {
 						t.Errorf("%s not written: %v", name, err)
