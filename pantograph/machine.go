@@ -168,6 +168,21 @@ type Printer struct {
 	// HoleGrowth is added to the diameter of every printed hole and bore, because printed
 	// holes come out small.
 	HoleGrowth float64
+	// Accuracy is how far, in mm, a printed edge may lie from where it is drawn; 0 means not
+	// stated (see AccuracyOrDefault).
+	Accuracy float64
+}
+
+// DefaultPrintAccuracy is the accuracy assumed of a desktop FDM printer, ±0.1 mm (common
+// practice, no source: makers and users quote ±0.1 to ±0.2 mm).
+const DefaultPrintAccuracy = 0.1
+
+// AccuracyOrDefault returns the printer's stated accuracy, or DefaultPrintAccuracy.
+func (p Printer) AccuracyOrDefault() float64 {
+	if p.Accuracy > 0 {
+		return p.Accuracy
+	}
+	return DefaultPrintAccuracy
 }
 
 // Dials are the five dials of a pantograph mill: the copy table's X and Y, the work table's

@@ -73,8 +73,6 @@ func TestPlanAgainstMachine(t *testing.T) {
 		{"not a fixed setting", func(m *Machine, _ *Setup) { m.Ratio = RatioRange{Min: 5, Max: 20, Settings: []float64{5, 20}} }, "cannot be set to ratio 10", true},
 		// derived: the 20 × 10 plate at 10:1 is 200 × 100 mm.
 		{"copy table too small", func(m *Machine, _ *Setup) { m.CopyTable = Travel{X: 150, Y: 150} }, "copy table travels only 150 x 150", true},
-		{"bed too small", func(m *Machine, _ *Setup) { m.Printer.Bed = Travel{X: 120, Y: 180} }, "the template alone is", false},
-		{"bed fits turned", func(m *Machine, _ *Setup) { m.Printer.Bed = Travel{X: 100, Y: 210} }, "no drill of Ø2", false},
 		{"stylus not owned", func(_ *Machine, s *Setup) { s.Stylus = 5 }, "uses a Ø5 mm stylus", false},
 		{"cutter not owned", func(_ *Machine, s *Setup) { s.Cutter = 0.3 }, "uses a Ø0.3 mm cutter", false},
 	}

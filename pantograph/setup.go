@@ -130,19 +130,9 @@ func machineWarnings(p Plan, m *Machine) []Problem {
 			Message: fmt.Sprintf("the template is %s x %s but the copy table travels only %s x %s: a ratio of about %s:1 or less fits",
 				u.Number(size.X), u.Length(size.Y), u.Number(t.X), u.Length(t.Y), num(fittingRatio(p.Setup.Ratio, size, t)))})
 	}
-	if b := m.Printer.Bed; b.X > 0 && b.Y > 0 && !fits(size, b) {
-		ws = append(ws, Problem{Severity: Warning, Message: fmt.Sprintf(
-			"the template alone is %s x %s mm, larger than the printer bed (%s x %s mm), and the plate adds margins, fixing slots and a front strip: print it in pieces or cut it from sheet",
-			num(size.X), num(size.Y), num(b.X), num(b.Y))})
-	}
 	return ws
 }
 
-// fits reports whether a box of the given size fits a bed either way round.
-func fits(size geom.Vec, bed Travel) bool {
-	return size.X <= bed.X+sizeTol && size.Y <= bed.Y+sizeTol ||
-		size.Y <= bed.X+sizeTol && size.X <= bed.Y+sizeTol
-}
 
 // ratioWarning reports a ratio the linkage cannot be set to; it stops the job.
 func ratioWarning(r float64, rr RatioRange) (Problem, bool) {

@@ -13,6 +13,8 @@ Usage:
   panto check PART [--json] [--units mm|in]   check a part file and say what limits the cutter
   panto plan PART --ratio R --cutter D [...]  plan the template: sizes, compensation, order of work
   panto stylus --ratio R --cutter D [...]     the stylus for a cutter, or the cutter for a stylus
+  panto ratios PART --cutter D [...]          every ratio the machine can be set to: template and
+                                              plate sizes, copy table, printer bed, stylus
   panto import DRAWING [-o PART.toml] [...]   make a part file from a DXF or SVG drawing
   panto sheet PART --ratio R --cutter D [...] write the dial-reading sheet (PDF, text, CSV, JSON)
   panto make PART --ratio R --cutter D -o DIR write the template plate (STL), sheet and drawings
@@ -121,6 +123,8 @@ func runHelp(args []string, stdout io.Writer) error {
 		_, err = fmt.Fprint(stdout, sheetUsage)
 	case args[0] == "make":
 		_, err = fmt.Fprint(stdout, makeUsage)
+	case args[0] == "ratios":
+		_, err = fmt.Fprint(stdout, ratiosUsage)
 	case args[0] == "materials":
 		return runMaterialsHelp(args[1:], stdout)
 	default:

@@ -49,7 +49,7 @@ func dispatch(args []string, stdout, stderr io.Writer) error {
 	}
 	commands := map[string]func(args []string, stdout, stderr io.Writer) error{
 		"check": runCheck, "plan": runPlan, "sheet": runSheet, "make": runMake,
-		"stylus": runStylus, "import": runImport,
+		"stylus": runStylus, "import": runImport, "ratios": runRatios,
 	}
 	if c, ok := commands[cmd]; ok {
 		return c(rest, stdout, stderr)

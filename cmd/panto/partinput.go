@@ -136,27 +136,42 @@ func readAndPlan(cmd, path string, o planFlags, setup pantograph.Setup, stderr i
 	}
 	j.part = part
 	if o.machine != "" {
-		m, err := partfile.ReadMachineFile(o.machine)
+		m, err := readMachine(cmd, o.machine)
 		if err != nil {
-			return j, badFile(cmd, "machine file", err)
+			return j, err
 		}
 		j.machine = &m
 	}
 	p, err := pantograph.PlanPart(part, setup, j.machine)
-	var pe pantograph.PartErrors
-	switch {
-	case errors.As(err, &pe):
-		var b strings.Builder
-		for _, pr := range pe {
-			b.WriteString(pr.Diagnostic() + "\n")
-		}
-		fmt.Fprintf(&b, "panto %s: %s has errors; fix them first (panto check shows them all)", cmd, path)
-		return j, &exitError{exitUsage, b.String()}
-	case err != nil:
-		return j, usagef(cmd, "%v", err)
+	if err != nil {
+		return j, planError(cmd, path, err)
 	}
 	j.plan = p
 	return j, nil
+}
+
+// readMachine reads the machine file at path.
+func readMachine(cmd, path string) (pantograph.Machine, error) {
+	m, err := partfile.ReadMachineFile(path)
+	if err != nil {
+		return m, badFile(cmd, "machine file", err)
+	}
+	return m, nil
+}
+
+// planError words why the part at path could not be planned: its errors, each on its line, or
+// what is wrong with the setup.
+func planError(cmd, path string, err error) error {
+	var pe pantograph.PartErrors
+	if !errors.As(err, &pe) {
+		return usagef(cmd, "%v", err)
+	}
+	var b strings.Builder
+	for _, pr := range pe {
+		b.WriteString(pr.Diagnostic() + "\n")
+	}
+	fmt.Fprintf(&b, "panto %s: %s has errors; fix them first (panto check shows them all)", cmd, path)
+	return &exitError{exitUsage, b.String()}
 }
 
 // readPart reads a part file, or a drawing with the drawing flags (its report going to

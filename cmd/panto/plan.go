@@ -47,12 +47,20 @@ func runPlan(args []string, stdout, stderr io.Writer) error {
 		return err
 	}
 	p := j.plan
+	var plate *pantograph.PlateReport
+	if j.machine != nil && j.machine.Printer.Bed.X > 0 {
+		rep, err := pantograph.ReportPlate(j.part, setup, &p, j.machine, pantograph.PlateOptions{})
+		if err != nil {
+			return failf("plan", "%v", err)
+		}
+		plate = &rep
+	}
 	if o.asJSON {
-		if err := writePlanJSON(stdout, p); err != nil {
+		if err := writePlanJSON(stdout, p, plate); err != nil {
 			return err
 		}
 	} else {
-		writePlan(stdout, p)
+		writePlan(stdout, p, plate)
 	}
 	warnPlan(stderr, p)
 	return planOutcome("plan", p)
@@ -145,8 +153,9 @@ func them(n int) string {
 	return "them"
 }
 
-// writePlan prints the plan in a machinist's words, every length in the part's own units.
-func writePlan(w io.Writer, p pantograph.Plan) {
+// writePlan prints the plan in a machinist's words, every length in the part's own units, and
+// how its plate prints when plate is not nil.
+func writePlan(w io.Writer, p pantograph.Plan, plate *pantograph.PlateReport) {
 	u := p.Units
 	fmt.Fprintf(w, "plan for %s  (%s)\n", p.Part, p.Source)
 	fmt.Fprintf(w, "  ratio       %s:1, the template %s times the part%s\n", num(p.Setup.Ratio), num(p.Setup.Ratio), layout(p))
@@ -154,6 +163,10 @@ func writePlan(w io.Writer, p pantograph.Plan) {
 	fmt.Fprintf(w, "  template    %s x %s, from %s to %s on the copy table\n",
 		u.Number(size.X), u.Length(size.Y), at(u, p.Bounds.Min), at(u, p.Bounds.Max))
 	fmt.Fprintf(w, "  datum       the template's origin is the datum seat, at %s on the part\n", at(u, p.Datum))
+	if plate != nil {
+		fmt.Fprintf(w, "  plate       %s x %s as printed, %s on the %s x %s printer bed\n", u.Number(plate.Fit.Size.X),
+			u.Length(plate.Fit.Size.Y), bedWords(plate.Fit), u.Number(plate.Fit.Bed.X), u.Length(plate.Fit.Bed.Y))
+	}
 	if p.Stock.Material != "" {
 		fmt.Fprintf(w, "  stock       %s, %s thick; speeds for %s (%s)\n", p.Stock.Material, u.Length(p.Stock.Thickness),
 			p.Material.Name, p.Material.Group)

@@ -27,6 +27,7 @@ type planJSON struct {
 	Order    []string             `json:"order"`
 	Steps    []stepJSON           `json:"steps"`
 	Warnings []warningJSON        `json:"warnings"`
+	Plate    *plateJSON           `json:"plate,omitempty"`
 	Done     bool                 `json:"done"`
 }
 
@@ -81,8 +82,18 @@ func vecs(vs []geom.Vec) [][2]float64 {
 
 func box(b geom.Box) boundsJSON { return boundsJSON{vec(b.Min), vec(b.Max)} }
 
-// writePlanJSON writes p to w as one indented JSON object.
-func writePlanJSON(w io.Writer, p pantograph.Plan) error {
+// plateJSON is how the plan's plate prints: its size as printed (mm), whether it fits the
+// printer bed, in how many pieces, and the largest ratio that prints in one piece (when not).
+type plateJSON struct {
+	Size            [2]float64 `json:"size"`
+	FitsBed         bool       `json:"fits_bed"`
+	Tiles           int        `json:"tiles"`
+	LargestOnePiece *float64   `json:"largest_one_piece,omitempty"`
+}
+
+// writePlanJSON writes p to w as one indented JSON object, with its plate when plate is not
+// nil.
+func writePlanJSON(w io.Writer, p pantograph.Plan, plate *pantograph.PlateReport) error {
 	out := planJSON{Part: p.Part, File: p.Source, Ratio: round(p.Setup.Ratio), Mirror: p.Setup.Mirror,
 		Rotate: round(p.Setup.Rotate.Degrees()), Datum: vec(p.Datum),
 		Template: templateJSON{box(p.Bounds)}, Features: []plannedFeatureJSON{},
@@ -107,6 +118,12 @@ func writePlanJSON(w io.Writer, p pantograph.Plan) error {
 			wj.Amount = roundPtr(wr.Amount)
 		}
 		out.Warnings = append(out.Warnings, wj)
+	}
+	if plate != nil {
+		out.Plate = &plateJSON{Size: vec(plate.Fit.Size), FitsBed: plate.Fit.FitsBed, Tiles: plate.Fit.Tiles}
+		if plate.LargestOnePiece > 0 {
+			out.Plate.LargestOnePiece = &plate.LargestOnePiece
+		}
 	}
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")

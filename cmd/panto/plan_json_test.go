@@ -31,7 +31,7 @@ func plate(t *testing.T) pantograph.Plan {
 
 func TestEncode(t *testing.T) {
 	var buf bytes.Buffer
-	if err := writePlanJSON(&buf, plate(t)); err != nil {
+	if err := writePlanJSON(&buf, plate(t), nil); err != nil {
 		t.Fatal(err)
 	}
 	var got map[string]any
@@ -60,10 +60,10 @@ func TestEncode(t *testing.T) {
 func TestEncodeIsDeterministic(t *testing.T) {
 	var a, b bytes.Buffer
 	p := plate(t)
-	if err := writePlanJSON(&a, p); err != nil {
+	if err := writePlanJSON(&a, p, nil); err != nil {
 		t.Fatal(err)
 	}
-	if err := writePlanJSON(&b, p); err != nil {
+	if err := writePlanJSON(&b, p, nil); err != nil {
 		t.Fatal(err)
 	}
 	if !bytes.Equal(a.Bytes(), b.Bytes()) {

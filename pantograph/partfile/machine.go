@@ -33,7 +33,7 @@ import (
 //	[[stylus]]    name, diameter, tip ("round", the default, or "pointed")
 //	[[cutter]]    name, diameter, material ("hss" or "carbide"), flutes
 //	[[drill]]     name, diameter, material
-//	[printer]     bed = [x, y], height, scale = [sx, sy], hole_growth
+//	[printer]     bed = [x, y], height, scale = [sx, sy], hole_growth, accuracy (default 0.1 mm)
 //	[[stock_material]] name, hss_drill, hss_mill, ... (see machine_materials.go)
 //
 // Only [ratio] is required of the file, because a pantograph mill is its ratio: without it no
@@ -52,6 +52,10 @@ var (
 	dialKeys   = []string{"copy_x", "copy_y", "work_x", "work_y", "depth"}
 	dialFields = []string{"pitch", "divisions", "units", "backlash", "count_up", "reversed"}
 )
+
+// maxPrintAccuracy bounds [printer] accuracy, mm: a printer that strays further than this is
+// no use for templates, and a larger figure is a slip (common practice, no source).
+const maxPrintAccuracy = 2.0
 
 // minRatio is the smallest ratio a machine may state: the template is never smaller than the
 // part in this method (DESIGN.md: the template is R times larger).
@@ -468,7 +472,7 @@ func readSpindle(top table, mc *pantograph.Machine) error {
 
 // readPrinter reads [printer].
 func readPrinter(top table, mc *pantograph.Machine) error {
-	t, ok, err := top.optChild("printer", "bed", "height", "scale", "hole_growth")
+	t, ok, err := top.optChild("printer", "bed", "height", "scale", "hole_growth", "accuracy")
 	if err != nil || !ok {
 		return err
 	}
@@ -485,6 +489,15 @@ func readPrinter(top table, mc *pantograph.Machine) error {
 	}
 	if v, ok := t.m["scale"]; ok {
 		if p.ScaleX, p.ScaleY, err = t.at("scale").pair(v, loc.scaleFactor); err != nil {
+			return err
+		}
+	}
+	if v, ok := t.m["accuracy"]; ok {
+		l := t.at("accuracy")
+		if p.Accuracy, err = l.length(v); err == nil && p.Accuracy > maxPrintAccuracy {
+			err = l.errf("is how far a printed edge may stray, at most %g mm, got %.4g mm", maxPrintAccuracy, p.Accuracy)
+		}
+		if err != nil {
 			return err
 		}
 	}
