@@ -133,7 +133,6 @@ func machineWarnings(p Plan, m *Machine) []Problem {
 	return ws
 }
 
-
 // ratioWarning reports a ratio the linkage cannot be set to; it stops the job.
 func ratioWarning(r float64, rr RatioRange) (Problem, bool) {
 	if rr.Allows(r) {
